@@ -5,7 +5,7 @@ import { cohenCoon } from './cohen-coon';
 import { imc } from './imc';
 import { lambda } from './lambda';
 import type { RuleCase, TuningRule } from './rule';
-import { tuneRequestSchema, type RuleId, type TuneRequest, type TuneResult, type TuningModel } from './schema';
+import { TuneRequestSchema, type RuleId, type TuneRequest, type TuneResult, type TuningModel } from './schema';
 import { simc } from './simc';
 import { zieglerNicholsOpenLoop, zieglerNicholsUltimate } from './ziegler-nichols';
 
@@ -59,7 +59,7 @@ export function applicableRules(modelType: TuningModel['type'], controller: 'pi'
  * applicability table does not list.
  */
 export function tune(input: TuneRequest | unknown): TuneResult {
-  const request = parseRequest(tuneRequestSchema, input);
+  const request = parseRequest(TuneRequestSchema, input);
   const rule = ruleById(request.rule);
   const { form } = ruleCase(rule, request.model.type, request.controller);
   const settings = rule.design(request.model, request.controller, request.options ?? {});

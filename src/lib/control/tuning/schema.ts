@@ -1,53 +1,11 @@
 import { z } from 'zod';
+import { FopdtSchema, IpdtSchema, SopdtSchema } from '../../schemas/process-model';
 
 /** A positive, finite time in s. */
-const seconds = z.number().finite().positive();
-/** A process gain: finite and not zero (its sign sets the controller's action). */
-const gain = z
-  .number()
-  .finite()
-  .refine((k) => k !== 0, { message: 'The process gain k must not be zero.' });
-
-/** K·e^(−θs)/(τs+1). */
-export const fopdtSchema = z.object({
-  type: z.literal('fopdt'),
-  /** Steady-state gain, output units per input unit. */
-  k: gain,
-  /** Time constant τ in s, > 0. */
-  tau: seconds,
-  /** Dead time θ in s, ≥ 0. */
-  theta: z.number().finite().nonnegative(),
-});
-
-/** K·e^(−θs)/((τ1 s+1)(τ2 s+1)) with τ1 ≥ τ2. */
-export const sopdtSchema = z
-  .object({
-    type: z.literal('sopdt'),
-    /** Steady-state gain. */
-    k: gain,
-    /** Dominant time constant τ1 in s. */
-    tau1: seconds,
-    /** Second time constant τ2 in s, ≤ τ1. */
-    tau2: seconds,
-    /** Dead time θ in s, ≥ 0. */
-    theta: z.number().finite().nonnegative(),
-  })
-  .refine((m) => m.tau1 >= m.tau2, {
-    message: 'tau1 must be the larger time constant (tau1 ≥ tau2).',
-    path: ['tau2'],
-  });
-
-/** K·e^(−θs)/s: k is the slope gain (output units per s per input unit). */
-export const ipdtSchema = z.object({
-  type: z.literal('ipdt'),
-  /** Slope gain in 1/s (dy/dt per unit of u). */
-  k: gain,
-  /** Dead time θ in s, ≥ 0. */
-  theta: z.number().finite().nonnegative(),
-});
+const seconds = z.number().positive();
 
 /** The loop's ultimate point from a relay or a gain-increase test. */
-export const ultimateSchema = z.object({
+export const UltimateSchema = z.object({
   type: z.literal('ultimate'),
   /** Ultimate gain Ku: the proportional gain at sustained oscillation. */
   ku: z.number().finite().positive(),
@@ -55,15 +13,15 @@ export const ultimateSchema = z.object({
   pu: seconds,
 });
 
-export const tuningModelSchema = z.discriminatedUnion('type', [
-  fopdtSchema,
-  sopdtSchema,
-  ipdtSchema,
-  ultimateSchema,
+export const TuningModelSchema = z.discriminatedUnion('type', [
+  FopdtSchema,
+  SopdtSchema,
+  IpdtSchema,
+  UltimateSchema,
 ]);
-export type TuningModel = z.infer<typeof tuningModelSchema>;
+export type TuningModel = z.infer<typeof TuningModelSchema>;
 
-export const ruleIdSchema = z.enum([
+export const RuleIdSchema = z.enum([
   'simc',
   'lambda',
   'imc',
@@ -72,12 +30,12 @@ export const ruleIdSchema = z.enum([
   'cohen-coon',
   'amigo',
 ]);
-export type RuleId = z.infer<typeof ruleIdSchema>;
+export type RuleId = z.infer<typeof RuleIdSchema>;
 
-export const controllerKindSchema = z.enum(['pi', 'pid']);
-export type ControllerKind = z.infer<typeof controllerKindSchema>;
+export const ControllerKindSchema = z.enum(['pi', 'pid']);
+export type ControllerKind = z.infer<typeof ControllerKindSchema>;
 
-export const tuneOptionsSchema = z
+export const TuneOptionsSchema = z
   .object({
     /** SIMC closed-loop time constant τc in s (default θ). */
     tauC: seconds.optional(),
@@ -85,19 +43,19 @@ export const tuneOptionsSchema = z
     lambda: seconds.optional(),
   })
   .strict();
-export type TuneOptions = z.infer<typeof tuneOptionsSchema>;
+export type TuneOptions = z.infer<typeof TuneOptionsSchema>;
 
 /** The body of POST /api/v1/calc/tune. */
-export const tuneRequestSchema = z.object({
-  model: tuningModelSchema,
-  rule: ruleIdSchema,
-  controller: controllerKindSchema,
-  options: tuneOptionsSchema.optional(),
+export const TuneRequestSchema = z.object({
+  model: TuningModelSchema,
+  rule: RuleIdSchema,
+  controller: ControllerKindSchema,
+  options: TuneOptionsSchema.optional(),
 });
-export type TuneRequest = z.infer<typeof tuneRequestSchema>;
+export type TuneRequest = z.infer<typeof TuneRequestSchema>;
 
 /** A tuned controller as the contract returns it; td is 0 for PI. Times in s. */
-export const tunedControllerSchema = z.object({
+export const TunedControllerSchema = z.object({
   /** ideal: kc·(1 + 1/(ti·s) + td·s); series: kc·(1 + 1/(ti·s))·(1 + td·s). */
   form: z.enum(['ideal', 'series']),
   /** Controller gain, output units per measurement unit. */
@@ -107,7 +65,7 @@ export const tunedControllerSchema = z.object({
   /** Derivative time in s (0 = none). */
   td: z.number(),
 });
-export type TunedController = z.infer<typeof tunedControllerSchema>;
+export type TunedController = z.infer<typeof TunedControllerSchema>;
 
 export interface TuneResult {
   controller: TunedController;

@@ -55,7 +55,7 @@ describe('tune', () => {
     { why: 'a zero gain', request: { model: { ...models.fopdt, k: 0 }, rule: 'simc', controller: 'pi' }, field: 'model.k' },
     { why: 'a negative time constant', request: { model: { ...models.fopdt, tau: -1 }, rule: 'simc', controller: 'pi' }, field: 'model.tau' },
     { why: 'a negative dead time', request: { model: { ...models.fopdt, theta: -1 }, rule: 'simc', controller: 'pi' }, field: 'model.theta' },
-    { why: 'tau2 above tau1', request: { model: { ...models.sopdt, tau2: 20 }, rule: 'simc', controller: 'pid' }, field: 'model.tau2' },
+    { why: 'tau2 above tau1', request: { model: { ...models.sopdt, tau2: 20 }, rule: 'simc', controller: 'pid' }, field: 'model.tau1' },
     { why: 'a non-finite option', request: { model: models.fopdt, rule: 'imc', controller: 'pi', options: { lambda: Number.NaN } }, field: 'options.lambda' },
     { why: 'an unknown option', request: { model: models.fopdt, rule: 'imc', controller: 'pi', options: { speed: 2 } }, field: 'options' },
     { why: 'a missing model', request: { rule: 'imc', controller: 'pi' }, field: 'model' },

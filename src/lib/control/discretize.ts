@@ -1,0 +1,157 @@
+/**
+ * Discrete-time equivalents of a transfer function (POST /api/v1/calc/discretize): zero-order
+ * hold (exact, via the matrix exponential of the controllable canonical state-space form) and
+ * Tustin (bilinear, optionally pre-warped). The dead time becomes whole samples z^(−d).
+ * Results are in descending powers of z with den[0] = 1.
+ */
+import { z } from 'zod';
+import { TransferFunctionSchema } from '../schemas/transfer-function';
+import { characteristicPolynomial, expm, type Matrix } from './discrete-linalg';
+import { parseRequest } from './request-error';
+import { ModelError } from './types';
+
+export const DiscretizeRequestSchema = z.object({
+  tf: TransferFunctionSchema,
+  /** Sample time in s. */
+  ts: z.number().finite().positive(),
+  method: z.enum(['zoh', 'tustin']),
+  /** Tustin only: frequency in rad/s where the discrete response matches exactly (0 < w < π/ts). */
+  prewarp: z.number().finite().positive().optional(),
+});
+export type DiscretizeRequest = z.input<typeof DiscretizeRequestSchema>;
+
+/** G(z) = num(z)/den(z)·z^(−delaySamples), descending powers of z, den[0] = 1. */
+export interface DiscreteTransferFunction {
+  num: number[];
+  den: number[];
+  delaySamples: number;
+}
+
+function trimLeading(p: readonly number[]): number[] {
+  let i = 0;
+  while (i < p.length - 1 && p[i] === 0) i++;
+  return p.slice(i);
+}
+
+function polyMul(a: readonly number[], b: readonly number[]): number[] {
+  const out = new Array<number>(a.length + b.length - 1).fill(0);
+  for (let i = 0; i < a.length; i++) for (let j = 0; j < b.length; j++) out[i + j] += a[i] * b[j];
+  return out;
+}
+
+/** Checked, trimmed rational part; the contract's invalid_model cases name their field. */
+function rationalPart(g: { num: number[]; den: number[] }): { num: number[]; den: number[] } {
+  const den = trimLeading(g.den);
+  const num = trimLeading(g.num);
+  if (den.every((c) => c === 0)) {
+    throw new ModelError('The denominator is all zeros; give at least one non-zero coefficient.', 'invalid_model', 'tf.den');
+  }
+  if (den.length > 21 || num.length > 21) {
+    throw new ModelError('The transfer function has order above 20; at most 20 is supported.', 'invalid_model', num.length > 21 ? 'tf.num' : 'tf.den');
+  }
+  if (num.length > den.length) {
+    throw new ModelError('The numerator has a higher order than the denominator (improper); add poles or a filter.', 'invalid_model', 'tf.num');
+  }
+  return { num, den };
+}
+
+/** The dead time as whole samples, or ModelError when it is not one within 1e-9 (relative). */
+export function delayInSamples(delay: number, ts: number): number {
+  const ratio = delay / ts;
+  const samples = Math.round(ratio);
+  if (Math.abs(ratio - samples) > 1e-9 * Math.max(1, ratio)) {
+    throw new ModelError(
+      `The dead time ${delay} s is ${ratio.toPrecision(6)} samples of ${ts} s; choose a sample time that divides it.`,
+      'invalid_request',
+      'tf.delay',
+    );
+  }
+  return samples;
+}
+
+/** Scales so den[0] = 1 and drops leading numerator terms that are zero. */
+function normalize(num: number[], den: number[], delaySamples: number): DiscreteTransferFunction {
+  const lead = den[0];
+  const n = num.map((c) => c / lead);
+  const peak = Math.max(...n.map(Math.abs));
+  let i = 0;
+  while (i < n.length - 1 && Math.abs(n[i]) <= 1e-14 * peak) i++;
+  return { num: n.slice(i), den: den.map((c) => c / lead), delaySamples };
+}
+
+/**
+ * Zero-order hold: with (A, B, C, D) the controllable canonical form of num/den,
+ * [[Ad, Bd], [0, 1]] = exp([[A, B], [0, 0]]·ts); den(z) = det(zI − Ad) and
+ * num(z) = det(zI − Ad + Bd·C) + (D − 1)·den(z) (the SISO state-space-to-TF identity).
+ */
+function zoh(num: number[], den: number[], ts: number): { num: number[]; den: number[] } {
+  const n = den.length - 1;
+  if (n === 0) return { num: [num[0] / den[0]], den: [1] };
+  const a0 = den[0];
+  const monic = den.map((c) => c / a0);
+  const padded = [...new Array<number>(den.length - num.length).fill(0), ...num.map((c) => c / a0)];
+  const d = padded[0];
+  const c = padded.slice(1).map((v, i) => v - d * monic[i + 1]);
+  const m: Matrix = Array.from({ length: n + 1 }, () => new Array<number>(n + 1).fill(0));
+  for (let j = 0; j < n; j++) m[0][j] = -monic[j + 1] * ts;
+  for (let i = 1; i < n; i++) m[i][i - 1] = ts;
+  m[0][n] = ts;
+  const e = expm(m);
+  const ad = e.slice(0, n).map((row) => row.slice(0, n));
+  const bd = e.slice(0, n).map((row) => row[n]);
+  const closed = ad.map((row, i) => row.map((v, j) => v - bd[i] * c[j]));
+  const dz = characteristicPolynomial(ad);
+  const nz = characteristicPolynomial(closed).map((v, i) => v + (d - 1) * dz[i]);
+  return { num: nz, den: dz };
+}
+
+/** Tustin: s = k·(z − 1)/(z + 1), k = 2/ts, or w/tan(w·ts/2) when pre-warped at w. */
+function tustin(num: number[], den: number[], k: number): { num: number[]; den: number[] } {
+  const order = den.length - 1;
+  const map = (p: number[]): number[] => {
+    let out = new Array<number>(order + 1).fill(0);
+    const degree = p.length - 1;
+    p.forEach((coef, idx) => {
+      const power = degree - idx;
+      let term = [coef * k ** power];
+      for (let i = 0; i < power; i++) term = polyMul(term, [1, -1]);
+      for (let i = 0; i < order - power; i++) term = polyMul(term, [1, 1]);
+      out = out.map((v, i) => v + term[i]);
+    });
+    return out;
+  };
+  return { num: map(num), den: map(den) };
+}
+
+function tustinScale(ts: number, prewarp: number | undefined): number {
+  if (prewarp === undefined) return 2 / ts;
+  if (prewarp * ts >= Math.PI) {
+    throw new ModelError(
+      `A pre-warp frequency must lie below the Nyquist frequency π/ts = ${(Math.PI / ts).toPrecision(4)} rad/s.`,
+      'invalid_request',
+      'prewarp',
+    );
+  }
+  return prewarp / Math.tan((prewarp * ts) / 2);
+}
+
+/** Discretizes a transfer function; validates the request (ModelError naming the field). */
+export function discretize(input: DiscretizeRequest | unknown): DiscreteTransferFunction {
+  const request = parseRequest(DiscretizeRequestSchema, input, (field) =>
+    field.startsWith('tf.') ? 'invalid_model' : 'invalid_request',
+  );
+  const { num, den } = rationalPart(request.tf);
+  const delaySamples = delayInSamples(request.tf.delay, request.ts);
+  if (request.method === 'zoh') {
+    if (request.prewarp !== undefined) {
+      throw new ModelError('Pre-warping applies to the Tustin method only.', 'invalid_request', 'prewarp');
+    }
+    const g = zoh(num, den, request.ts);
+    return normalize(g.num, g.den, delaySamples);
+  }
+  const g = tustin(num, den, tustinScale(request.ts, request.prewarp));
+  if (g.den[0] === 0) {
+    throw new ModelError('The continuous system has a pole at s = k (Tustin maps it to infinity); change ts.', 'invalid_request', 'ts');
+  }
+  return normalize(g.num, g.den, delaySamples);
+}
