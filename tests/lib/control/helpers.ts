@@ -17,3 +17,4 @@ export function modelErrorOf(fn: () => unknown): ModelError {
   }
   throw new Error('expected a ModelError, got a result');
 }
+
