@@ -7,6 +7,9 @@ import { defineConfig } from 'vitest/config';
  */
 export default defineConfig({
   test: {
+    // The JSON report lets .ci/run print a one-line tally of what ran.
+    reporters: ['default', 'json'],
+    outputFile: { json: 'test-artifacts/vitest-report.json' },
     projects: [
       { test: { name: 'unit', include: ['tests/lib/**/*.test.ts'], environment: 'node' } },
       { test: { name: 'api', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000 } },
