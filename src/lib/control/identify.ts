@@ -8,7 +8,7 @@
  */
 import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { baseline, rampGuess, secondOrderGuesses, twoPointGuess } from './identify-guess';
-import { fopdtStep, ipdtStep, sopdtStep } from './identify-models';
+import { fopdtStep, fopdtStepGradient, ipdtStep, ipdtStepGradient, sopdtStep, sopdtStepGradient } from './identify-models';
 import { IdentifyRequestSchema, readStepTest, type IdentifyRequest, type StepTest } from './identify-step';
 import { ModelError, type ProcessModel } from './types';
 
@@ -20,8 +20,11 @@ export interface IdentifyResult {
   fit: { rmse: number; r2: number };
 }
 
-/** Scaled parameters: [gain, ...time parameters, offset]; times as shares of the span. */
-type Shape = (x: number, times: number[]) => number;
+/** Unit step response of a model at scaled time x for scaled time parameters, and its gradient. */
+interface Shape {
+  value(x: number, times: number[]): number;
+  gradient(x: number, times: number[]): number[];
+}
 
 interface Candidate {
   shape: Shape;
@@ -64,7 +67,15 @@ function sumSquares(data: Scaled, f: (x: number) => number): number {
  * stops at an absolute error, which noisy data never reach.
  */
 function fitFrom(data: Scaled, c: Candidate): { params: number[]; sse: number } {
-  const model = (p: number[]) => (x: number) => p[0] * c.shape(x, p.slice(1, -1)) + p[p.length - 1];
+  const model = (p: number[]) => {
+    const times = p.slice(1, -1);
+    return (x: number) => p[0] * c.shape.value(x, times) + p[p.length - 1];
+  };
+  // Parameters [gain, ...times, offset]: ∂/∂gain = shape, ∂/∂times = gain·∂shape, ∂/∂offset = 1.
+  const jacobian = (p: number[]) => {
+    const times = p.slice(1, -1);
+    return (x: number) => [c.shape.value(x, times), ...c.shape.gradient(x, times).map((g) => p[0] * g), 1];
+  };
   const n = c.times.length;
   const bounds = {
     minValues: [-1e9, ...new Array<number>(n - 1).fill(1e-6), 0, -1e3],
@@ -76,8 +87,7 @@ function fitFrom(data: Scaled, c: Candidate): { params: number[]; sse: number } 
     const result = levenbergMarquardt({ x: data.x, y: data.y }, model, {
       ...bounds,
       initialValues: params,
-      gradientDifference: 1e-6,
-      centralDifference: true,
+      jacobianFunction: jacobian,
       damping: 1e-2,
       maxIterations: 25,
       errorTolerance: 1e-14,
@@ -102,9 +112,18 @@ function best(data: Scaled, candidates: Candidate[]): number[] {
   return winner.params;
 }
 
-const fopdtShape: Shape = (x, [tau, theta]) => fopdtStep(x, tau, theta);
-const sopdtShape: Shape = (x, [tau1, tau2, theta]) => sopdtStep(x, tau1, tau2, theta);
-const ipdtShape: Shape = (x, [theta]) => ipdtStep(x, theta);
+const fopdtShape: Shape = {
+  value: (x, [tau, theta]) => fopdtStep(x, tau, theta),
+  gradient: (x, [tau, theta]) => fopdtStepGradient(x, tau, theta),
+};
+const sopdtShape: Shape = {
+  value: (x, [tau1, tau2, theta]) => sopdtStep(x, tau1, tau2, theta),
+  gradient: (x, [tau1, tau2, theta]) => sopdtStepGradient(x, tau1, tau2, theta),
+};
+const ipdtShape: Shape = {
+  value: (x, [theta]) => ipdtStep(x, theta),
+  gradient: (x, [theta]) => ipdtStepGradient(x, theta),
+};
 
 function fitModel(test: StepTest, type: IdentifyRequest['model'], data: Scaled): ProcessModel {
   const { span, spread } = data;
