@@ -72,6 +72,13 @@ export function delayInSamples(delay: number, ts: number): number {
 /** Scales so den[0] = 1 and drops leading numerator terms that are zero. */
 function normalize(num: number[], den: number[], delaySamples: number): DiscreteTransferFunction {
   const lead = den[0];
+  if (![...num, ...den].every(Number.isFinite) || lead === 0) {
+    throw new ModelError(
+      'The discrete coefficients overflow: an unstable pole grows too much over one sample; shorten ts.',
+      'invalid_request',
+      'ts',
+    );
+  }
   const n = num.map((c) => c / lead);
   const peak = Math.max(...n.map(Math.abs));
   let i = 0;

@@ -82,6 +82,7 @@ describe('discretize', () => {
     { why: 'a zero sample time', request: { tf: { num: [1], den: [1, 1] }, ts: 0, method: 'zoh' }, code: 'invalid_request', field: 'ts' },
     { why: 'an unknown method', request: { tf: { num: [1], den: [1, 1] }, ts: 1, method: 'foh' }, code: 'invalid_request', field: 'method' },
     { why: 'a NaN coefficient', request: { tf: { num: [Number.NaN], den: [1, 1] }, ts: 1, method: 'zoh' }, code: 'invalid_model', field: 'tf.num.0' },
+    { why: 'an unstable pole over a very long sample', request: { tf: { num: [1], den: [1, -1] }, ts: 1e4, method: 'zoh' }, code: 'invalid_request', field: 'ts' },
     { why: 'a pre-warp above Nyquist', request: { tf: { num: [1], den: [1, 1] }, ts: 1, method: 'tustin', prewarp: 4 }, code: 'invalid_request', field: 'prewarp' },
     { why: 'a pre-warp with ZOH', request: { tf: { num: [1], den: [1, 1] }, ts: 1, method: 'zoh', prewarp: 1 }, code: 'invalid_request', field: 'prewarp' },
     { why: 'a negative dead time', request: { tf: { num: [1], den: [1, 1], delay: -1 }, ts: 1, method: 'zoh' }, code: 'invalid_model', field: 'tf.delay' },
