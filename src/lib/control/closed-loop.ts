@@ -1,0 +1,124 @@
+/**
+ * Closed-loop time responses of r → e = r − ym → C → (+ d) → G → y → H → ym with the dead
+ * times of G and H taken exactly. Without dead time in the loop the closed loop is rational and
+ * simulated exactly. With dead time θ = θG + θH the loop is cut at the delay: the rational part
+ * (C·G_R, then H_R) is advanced exactly over each fixed step for an error signal that is linear
+ * within the step (first-order hold), and the delayed measurement is read from the stored history
+ * by linear interpolation; when θ is shorter than a step the one unknown sample is solved for.
+ * The dead time is never replaced by a rational approximation.
+ */
+import { ModelError, type TransferFunction } from './types';
+import { add, degree, multiply } from './polynomial';
+import { cascade, discretize, toStateSpace } from './state-space';
+import { stepResponse, type TimeResponse } from './simulate';
+import { gridStep } from './time-grid';
+
+/** The loop's blocks: controller C (may be improper), plant G and sensor H with their dead times. */
+export interface Loop {
+  controller: TransferFunction;
+  plant: TransferFunction;
+  sensor: TransferFunction;
+}
+
+export type LoopInput = 'setpoint' | 'load';
+
+/** Options for the fixed-step simulation; steps are at most tFinal/minSteps long. */
+export interface ClosedLoopOptions {
+  /** Least number of internal steps over the horizon; default 1000. */
+  minSteps?: number;
+}
+
+/** Rational closed loop Y/R or Y/D of a loop without dead time. */
+export function closedLoopTransferFunction(loop: Loop, input: LoopInput): TransferFunction {
+  const { controller: c, plant: g, sensor: h } = loop;
+  const den = add(multiply(multiply(c.den, g.den), h.den), multiply(multiply(c.num, g.num), h.num));
+  const num = input === 'setpoint' ? multiply(multiply(c.num, g.num), h.den) : multiply(multiply(g.num, c.den), h.den);
+  if (degree(den) === -Infinity) throw new ModelError('The closed loop is degenerate: 1 + C·G·H is identically zero.', 'invalid_model', 'controller');
+  if (degree(num) > degree(den)) {
+    throw new ModelError('The closed loop is improper (an unfiltered derivative on a plant without lag); add a derivative filter.', 'invalid_model', 'controller');
+  }
+  return { num, den, delay: g.delay + h.delay };
+}
+
+/** Unit step response of the closed loop to the setpoint or to a load at the plant input. */
+export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInput = 'setpoint', options: ClosedLoopOptions = {}): TimeResponse {
+  const theta = loop.plant.delay + loop.sensor.delay;
+  if (theta === 0) return stepResponse(closedLoopTransferFunction(loop, input), t);
+  const dt = gridStep(t);
+  const span = t[t.length - 1] - t[0];
+  const sub = Math.max(1, Math.ceil(((options.minSteps ?? 1000) * dt) / span - 1e-9));
+  const h = dt / sub;
+  const steps = (t.length - 1) * sub;
+  const rational = (g: TransferFunction): TransferFunction => ({ num: g.num, den: g.den, delay: 0 });
+  const gR = rational(loop.plant);
+  const hR = rational(loop.sensor);
+  const p = { num: multiply(loop.controller.num, gR.num), den: multiply(loop.controller.den, gR.den), delay: 0 };
+  if (degree(p.num) > degree(p.den)) {
+    throw new ModelError('With dead time in the loop, controller times plant must be proper; add a derivative filter.', 'invalid_model', 'controller');
+  }
+  const ss = cascade(toStateSpace(p), toStateSpace(hR));
+  const { phi, g0, g1 } = discretize(ss, h);
+  const n = ss.n;
+  const [cz, cm] = ss.c;
+  const [dz, dm] = ss.d;
+  // Known forcing by the load step: z2 = G_R·d and m2 = H_R·G_R·d, exact on the internal grid.
+  const inner = Array.from({ length: steps + 1 }, (_, i) => i * h);
+  const z2 = input === 'load' ? stepResponse(gR, inner).y : null;
+  const m2 = input === 'load' ? stepResponse({ num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 }, inner).y : null;
+  const r = input === 'setpoint' ? 1 : 0;
+  const zHist = new Float64Array(steps + 1);
+  const mHist = new Float64Array(steps + 1);
+  let x: Float64Array = new Float64Array(n);
+  let xn: Float64Array = new Float64Array(n);
+  const pred = new Float64Array(n);
+  const delayed = (tau: number, upTo: number): number => {
+    if (tau < -1e-9 * h) return 0;
+    const f = Math.max(0, tau / h);
+    const j = Math.min(Math.floor(f), upTo);
+    if (j >= upTo) return mHist[upTo];
+    return mHist[j] + (f - j) * (mHist[j + 1] - mHist[j]);
+  };
+  let cmg1 = dm;
+  for (let k = 0; k < n; k++) cmg1 += cm[k] * g1[k];
+  let e = r;
+  for (let i = 0; i <= steps; i++) {
+    let zi = dz * e + (z2 ? z2[i] : 0);
+    let mi = dm * e + (m2 ? m2[i] : 0);
+    for (let k = 0; k < n; k++) {
+      zi += cz[k] * x[k];
+      mi += cm[k] * x[k];
+    }
+    zHist[i] = zi;
+    mHist[i] = mi;
+    if (i === steps) break;
+    for (let a = 0; a < n; a++) {
+      let s = g0[a] * e;
+      const row = a * n;
+      for (let b = 0; b < n; b++) s += phi[row + b] * x[b];
+      pred[a] = s;
+    }
+    const tau = (i + 1) * h - theta;
+    let eNext: number;
+    if (tau <= i * h + 1e-12 * h) {
+      eNext = r - delayed(tau, i);
+    } else {
+      // θ < h: m at tau lies inside this step and depends on e(i+1) itself (linear, solved directly).
+      const alpha = (tau - i * h) / h;
+      let beta = m2 ? m2[i + 1] : 0;
+      for (let k = 0; k < n; k++) beta += cm[k] * pred[k];
+      eNext = (r - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
+    }
+    for (let a = 0; a < n; a++) xn[a] = pred[a] + g1[a] * eNext;
+    [x, xn] = [xn, x];
+    e = eNext;
+  }
+  const y = t.map((tk) => {
+    const tau = tk - t[0] - loop.plant.delay;
+    if (tau < -1e-9 * h) return 0;
+    const f = Math.max(0, tau / h);
+    const j = Math.floor(f);
+    if (j >= steps) return zHist[steps];
+    return zHist[j] + (f - j) * (zHist[j + 1] - zHist[j]);
+  });
+  return { t: [...t], y };
+}

@@ -1,0 +1,95 @@
+/**
+ * Small dense square matrices (row-major Float64Array) and the matrix exponential by
+ * scaling and squaring with a [6/6] Padé approximant (Moler & Van Loan, "Nineteen dubious
+ * ways…", 2003, method 3). Written here to keep the engine free of a linear-algebra bundle.
+ */
+
+export function identity(n: number): Float64Array {
+  const m = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) m[i * n + i] = 1;
+  return m;
+}
+
+export function matMul(a: Float64Array, b: Float64Array, n: number): Float64Array {
+  const out = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let k = 0; k < n; k++) {
+      const aik = a[i * n + k];
+      if (aik === 0) continue;
+      for (let j = 0; j < n; j++) out[i * n + j] += aik * b[k * n + j];
+    }
+  }
+  return out;
+}
+
+/** Solves A·X = B for X (both n×n) by Gaussian elimination with partial pivoting. */
+export function solve(a: Float64Array, b: Float64Array, n: number): Float64Array {
+  const m = Float64Array.from(a);
+  const x = Float64Array.from(b);
+  for (let c = 0; c < n; c++) {
+    let p = c;
+    for (let r = c + 1; r < n; r++) if (Math.abs(m[r * n + c]) > Math.abs(m[p * n + c])) p = r;
+    if (p !== c) {
+      for (let j = 0; j < n; j++) {
+        [m[c * n + j], m[p * n + j]] = [m[p * n + j], m[c * n + j]];
+        [x[c * n + j], x[p * n + j]] = [x[p * n + j], x[c * n + j]];
+      }
+    }
+    const piv = m[c * n + c];
+    for (let r = c + 1; r < n; r++) {
+      const f = m[r * n + c] / piv;
+      if (f === 0) continue;
+      for (let j = c; j < n; j++) m[r * n + j] -= f * m[c * n + j];
+      for (let j = 0; j < n; j++) x[r * n + j] -= f * x[c * n + j];
+    }
+  }
+  for (let c = n - 1; c >= 0; c--) {
+    const piv = m[c * n + c];
+    for (let j = 0; j < n; j++) {
+      let s = x[c * n + j];
+      for (let k = c + 1; k < n; k++) s -= m[c * n + k] * x[k * n + j];
+      x[c * n + j] = s / piv;
+    }
+  }
+  return x;
+}
+
+function infNorm(a: Float64Array, n: number): number {
+  let best = 0;
+  for (let i = 0; i < n; i++) {
+    let s = 0;
+    for (let j = 0; j < n; j++) s += Math.abs(a[i * n + j]);
+    best = Math.max(best, s);
+  }
+  return best;
+}
+
+/** e^A for an n×n matrix A. */
+export function expm(a: Float64Array, n: number): Float64Array {
+  const norm = infNorm(a, n);
+  const s = norm > 0.5 ? Math.max(0, Math.ceil(Math.log2(norm / 0.5))) : 0;
+  const f = 2 ** -s;
+  const x = a.map((v) => v * f);
+  const q = 6;
+  let c = 0.5;
+  let power: Float64Array = Float64Array.from(x);
+  const num = identity(n);
+  const den = identity(n);
+  for (let i = 0; i < n * n; i++) {
+    num[i] += c * x[i];
+    den[i] -= c * x[i];
+  }
+  let sign = -1;
+  for (let k = 2; k <= q; k++) {
+    c = (c * (q - k + 1)) / (k * (2 * q - k + 1));
+    power = matMul(power, x, n);
+    sign = -sign;
+    for (let i = 0; i < n * n; i++) {
+      num[i] += c * power[i];
+      den[i] += sign * c * power[i];
+    }
+  }
+  let e: Float64Array = solve(den, num, n);
+  for (let k = 0; k < s; k++) e = matMul(e, e, n);
+  return e;
+}

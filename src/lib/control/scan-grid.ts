@@ -1,0 +1,64 @@
+/**
+ * The dense frequency grid that margin and stability searches start from: logarithmic over the
+ * model's time scales widened by three decades each side, plus the frequencies of every root
+ * (so lightly damped resonances are not stepped over). Crossings are then refined on the exact
+ * function, so results do not depend on this grid.
+ */
+import type { FactoredModel } from './frequency';
+import { magnitudeAt, timeScales } from './frequency';
+
+const PER_DECADE = 24;
+
+export function scanGrid(m: FactoredModel): number[] {
+  const scales = timeScales(m);
+  const lo = Math.min(...scales) / 1e3;
+  let hi = Math.max(...scales) * 1e3;
+  // Strictly proper loops: go on until |L| is well below 1 so no gain crossover is left out.
+  if (m.pr.length > m.zr.length) {
+    for (let i = 0; i < 12 && magnitudeAt(m, hi) > 0.1; i++) hi *= 10;
+  }
+  const a = Math.log10(lo), b = Math.log10(hi);
+  const n = Math.ceil((b - a) * PER_DECADE) + 1;
+  const w: number[] = [];
+  for (let i = 0; i < n; i++) w.push(10 ** (a + ((b - a) * i) / (n - 1)));
+  for (const r of [...m.poles, ...m.zeros]) {
+    const mag = Math.hypot(r.re, r.im);
+    if (mag === 0) continue;
+    w.push(mag);
+    const im = Math.abs(r.im);
+    if (im > 0 && Math.abs(r.re) < 0.5 * im) {
+      for (const k of [-2, -1, -0.5, 0.5, 1, 2]) {
+        const x = im + k * Math.abs(r.re);
+        if (x > 0) w.push(x);
+      }
+    }
+  }
+  return w.filter((x) => x >= lo && x <= hi).sort((p, q) => p - q);
+}
+
+/** Bisection on f over [a, b] where f(a), f(b) differ in sign; in log w for frequency searches. */
+export function bisectLog(f: (w: number) => number, a: number, b: number, fa: number): number {
+  let la = Math.log(a), lb = Math.log(b);
+  let va = fa;
+  for (let i = 0; i < 60; i++) {
+    const lm = 0.5 * (la + lb);
+    const vm = f(Math.exp(lm));
+    if (vm === 0) return Math.exp(lm);
+    if ((vm < 0) === (va < 0)) { la = lm; va = vm; } else lb = lm;
+    if (lb - la < 1e-13) break;
+  }
+  return Math.exp(0.5 * (la + lb));
+}
+
+/** Golden-section search for the maximum of f in log w on [a, b]. */
+export function maximizeLog(f: (w: number) => number, a: number, b: number): { w: number; value: number } {
+  const g = (Math.sqrt(5) - 1) / 2;
+  let la = Math.log(a), lb = Math.log(b);
+  let l1 = lb - g * (lb - la), l2 = la + g * (lb - la);
+  let f1 = f(Math.exp(l1)), f2 = f(Math.exp(l2));
+  for (let i = 0; i < 60 && lb - la > 1e-10; i++) {
+    if (f1 < f2) { la = l1; l1 = l2; f1 = f2; l2 = la + g * (lb - la); f2 = f(Math.exp(l2)); }
+    else { lb = l2; l2 = l1; f2 = f1; l1 = lb - g * (lb - la); f1 = f(Math.exp(l1)); }
+  }
+  return f1 > f2 ? { w: Math.exp(l1), value: f1 } : { w: Math.exp(l2), value: f2 };
+}

@@ -1,0 +1,140 @@
+/**
+ * Poles, zeros and stability. A loop without dead time is judged by the roots of its
+ * characteristic polynomial; with dead time by the Nyquist criterion (Z = P − Δarg(1 + L)/2π along
+ * the Nyquist contour, indented to the right of imaginary-axis poles), with the argument
+ * tracked adaptively so that no encirclement is stepped over, however long the dead time.
+ */
+import type { Complex, TransferFunction } from './types';
+import { type FactoredModel, magnitudeAt, phaseAt, timeScales } from './frequency';
+import { add, product } from './polynomial';
+import { roots } from './roots';
+
+/** A root with its damping ratio ζ = −re/|p| and natural frequency ωn = |p| (rad/s). */
+export interface RootInfo extends Complex {
+  /** Damping ratio; null for a root at the origin. */
+  damping: number | null;
+  /** Natural frequency in rad/s. */
+  naturalFrequency: number;
+}
+
+export function rootInfo(r: Complex): RootInfo {
+  const wn = Math.hypot(r.re, r.im);
+  return { re: r.re, im: r.im, damping: wn === 0 ? null : -r.re / wn, naturalFrequency: wn };
+}
+
+/** Real part counted as zero (on the imaginary axis) below this fraction of the root's size. */
+const AXIS_TOL = 1e-9;
+
+function onAxis(r: Complex): boolean {
+  return Math.abs(r.re) <= AXIS_TOL * Math.max(Math.hypot(r.re, r.im), 1e-300);
+}
+
+/** All roots strictly in the left half plane (nothing on the imaginary axis). */
+export function allInLeftHalfPlane(list: readonly Complex[]): boolean {
+  return list.every((r) => r.re < 0 && !onAxis(r));
+}
+
+/** Closed-loop characteristic polynomial Π den + Π num of a delay-free loop. */
+export function characteristicPolynomial(blocks: readonly TransferFunction[]): number[] {
+  return add(product(blocks.map((b) => b.den)), product(blocks.map((b) => b.num)));
+}
+
+/** Whether the unity negative feedback loop around L = Π blocks is asymptotically stable. */
+export function closedLoopStable(blocks: readonly TransferFunction[], loop: FactoredModel): boolean {
+  if (loop.delay === 0) return allInLeftHalfPlane(roots(characteristicPolynomial(blocks)));
+  return nyquistUnstableCount(loop) === 0;
+}
+
+/**
+ * Number of closed-loop roots in the closed right half plane of 1 + L(s) = 0, L with dead time.
+ * A root on the imaginary axis counts as unstable (returns at least 1).
+ */
+export function nyquistUnstableCount(m: FactoredModel): number {
+  const relDeg = m.pr.length - m.zr.length;
+  if (relDeg < 0) return Infinity;
+  // Biproper with dead time: a neutral loop, unstable when |L(∞)| ≥ 1.
+  if (relDeg === 0 && Math.abs(m.gain) >= 1) return Infinity;
+  const rhp = m.poles.filter((p) => p.re > 0 && !onAxis(p)).length;
+  const axis = m.poles.filter((p) => onAxis(p) && p.im >= 0);
+  const origin = axis.filter((p) => p.im === 0 || Math.abs(p.im) <= AXIS_TOL * Math.hypot(p.re, p.im)).length;
+  const scales = timeScales(m);
+  const eps = Math.min(...scales) * 1e-7;
+  const wEnd = endFrequency(m, scales);
+  // Split the positive imaginary axis at the poles on it (indented to the right).
+  const cuts = [...new Set(axis.map((p) => Math.abs(p.im)).filter((w) => w > eps))].sort((a, b) => a - b);
+  const indentCount = axis.length - origin;
+  const bounds = [eps, ...cuts.flatMap((c) => [c * (1 - 1e-7), c * (1 + 1e-7)]), wEnd];
+  let delta = 0;
+  let closest = Infinity;
+  for (let k = 0; k + 1 < bounds.length; k += 2) {
+    const seg = trackArgument(m, bounds[k], bounds[k + 1]);
+    delta += seg.delta;
+    closest = Math.min(closest, seg.closest);
+  }
+  const end = onePlusL(m, wEnd);
+  // Beyond wEnd, |L| < 1 stays inside a disc around 1: no more encirclements.
+  const total = 2 * (delta - Math.atan2(end.im, end.re)) - Math.PI * origin - 2 * Math.PI * indentCount;
+  if (closest < 1e-10) return Math.max(1, rhp);
+  return Math.max(0, Math.round(rhp - total / (2 * Math.PI)));
+}
+
+function onePlusL(m: FactoredModel, w: number): Complex {
+  const mag = magnitudeAt(m, w);
+  const ph = (phaseAt(m, w) * Math.PI) / 180;
+  return { re: 1 + mag * Math.cos(ph), im: mag * Math.sin(ph) };
+}
+
+/** A frequency beyond which |L(jw)| < 1 − margin for sure (bound from the root magnitudes). */
+function endFrequency(m: FactoredModel, scales: number[]): number {
+  const rMax = Math.max(...scales, ...[...m.poles, ...m.zeros].map((r) => Math.hypot(r.re, r.im)));
+  const limit = m.pr.length === m.zr.length ? (1 + Math.abs(m.gain)) / 2 : 0.5;
+  let w = 2 * rMax;
+  const bound = (x: number) => {
+    let v = Math.abs(m.gain);
+    for (const z of m.zeros) v *= x + Math.hypot(z.re, z.im);
+    for (const p of m.poles) v /= x - Math.hypot(p.re, p.im);
+    return v;
+  };
+  for (let i = 0; i < 200 && bound(w) >= limit; i++) w *= 2;
+  return w;
+}
+
+/** Continuous change of arg(1 + L(jw)) from a to b, refined until each step turns less than 30°. */
+function trackArgument(m: FactoredModel, a: number, b: number): { delta: number; closest: number } {
+  const decades = Math.log10(b / a);
+  const n = Math.max(2, Math.ceil(decades * 30));
+  let prevW = a;
+  let prev = onePlusL(m, a);
+  let delta = 0;
+  let closest = Math.hypot(prev.re, prev.im);
+  const maxTurn = Math.PI / 6;
+  const stepTo = (w1: number, depth: number): void => {
+    const next = onePlusL(m, w1);
+    let turn = Math.atan2(prev.re * next.im - prev.im * next.re, prev.re * next.re + prev.im * next.im);
+    // The dead time alone turns L by w·θ: never step further than a fraction of a turn of it.
+    const delayTurn = (w1 - prevW) * m.delay;
+    if ((Math.abs(turn) > maxTurn || delayTurn > maxTurn) && depth < 40) {
+      const mid = Math.sqrt(prevW * w1);
+      stepTo(mid, depth + 1);
+      stepTo(w1, depth + 1);
+      return;
+    }
+    delta += turn;
+    closest = Math.min(closest, Math.hypot(next.re, next.im));
+    prev = next;
+    prevW = w1;
+  };
+  for (let i = 1; i < n; i++) stepTo(a * (b / a) ** (i / (n - 1)), 0);
+  return { delta, closest };
+}
+
+/** Open-path stability: every pole strictly in the left half plane (dead time does not matter). */
+export function openPathStable(m: FactoredModel): boolean {
+  return allInLeftHalfPlane(m.poles);
+}
+
+/** Poles of the rational part as given (no cancellation), sorted by real then imaginary part. */
+export function polesOf(m: FactoredModel): Complex[] {
+  return m.poles.map((p) => ({ re: p.re, im: p.im }));
+}
+
