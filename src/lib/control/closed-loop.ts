@@ -109,7 +109,9 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
       eNext = (r - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
     }
     for (let a = 0; a < n; a++) xn[a] = pred[a] + g1[a] * eNext;
-    [x, xn] = [xn, x];
+    const swap = x;
+    x = xn;
+    xn = swap;
     e = eNext;
   }
   const y = t.map((tk) => {

@@ -14,7 +14,7 @@ import { bisectLog, maximizeLog, scanGrid } from './scan-grid';
 const DEG = Math.PI / 180;
 
 export interface MarginOptions {
-  /** Most phase crossovers listed (lowest first); default 20. */
+  /** Most phase crossovers listed (lowest first); default 10. */
   maxPhaseCrossovers?: number;
 }
 
@@ -43,7 +43,7 @@ function lowFrequencyGain(m: FactoredModel): number {
 }
 
 export function margins(m: FactoredModel, options: MarginOptions = {}): Margins {
-  const maxPhase = options.maxPhaseCrossovers ?? 20;
+  const maxPhase = options.maxPhaseCrossovers ?? 10;
   const w = scanGrid(m);
   const n = w.length;
   const logMag = new Float64Array(n);
