@@ -9,7 +9,7 @@
  */
 import { ModelError, type TransferFunction } from './types';
 import { add, degree, multiply } from './polynomial';
-import { cascade, discretize, toStateSpace } from './state-space';
+import { cascade, discretizeStates as discretize, toStateSpace } from './state-space';
 import { stepResponse, type TimeResponse } from './simulate';
 import { gridStep } from './time-grid';
 

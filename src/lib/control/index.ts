@@ -8,7 +8,7 @@ export { series, parallel, feedback, chain } from './connect';
 export { pidToTransferFunction } from './pid';
 export { toIdeal, toParallel, toSeries } from './pid-forms';
 export * from './pid-units';
-export { toStateSpace, discretize, type StateSpace } from './state-space';
+export { toStateSpace, discretizeStates, cascade, type StateSpace } from './state-space';
 export { expm } from './matrix';
 export { timeGrid, gridStep } from './time-grid';
 export { stepResponse, impulseResponse, rampResponse, simulateInput, type TimeResponse } from './simulate';

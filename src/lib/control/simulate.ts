@@ -6,7 +6,7 @@
 import type { TransferFunction } from './types';
 import { ModelError } from './types';
 import { series } from './connect';
-import { discretize, toStateSpace, type StateSpace } from './state-space';
+import { discretizeStates as discretize, toStateSpace, type StateSpace } from './state-space';
 import { gridStep } from './time-grid';
 
 /** A sampled response; t in s. */

@@ -103,7 +103,7 @@ export interface Discrete {
   g1: Float64Array;
 }
 
-export function discretize(ss: StateSpace, h: number): Discrete {
+export function discretizeStates(ss: StateSpace, h: number): Discrete {
   const n = ss.n;
   const m = n + 2;
   const big = new Float64Array(m * m);
@@ -128,7 +128,7 @@ export function discretize(ss: StateSpace, h: number): Discrete {
 
 /** State after time h from x0 = 0 under an impulse (e^(A·h)·B) — for exact delayed starts. */
 export function impulseState(ss: StateSpace, h: number): Float64Array {
-  const d = discretize(ss, h);
+  const d = discretizeStates(ss, h);
   const out = new Float64Array(ss.n);
   for (let i = 0; i < ss.n; i++) {
     let s = 0;
