@@ -22,11 +22,15 @@ async function startWorker(): Promise<Worker> {
     : new Worker(new URL(WORKER_URL), options);
   w.unref();
   w.on('message', (msg: WorkerResponse) => settle(msg.id, msg.result));
-  w.on('error', () => failAll('The body could not be compiled; simplify it and try again.'));
-  w.on('exit', () => {
-    if (worker === w) worker = null;
+  // A worker that was replaced after a timeout has nothing pending any more; only the current one's
+  // crash fails the waiting body.
+  const crashed = () => {
+    if (worker !== w) return;
+    worker = null;
     failAll('The body could not be compiled; simplify it and try again.');
-  });
+  };
+  w.on('error', crashed);
+  w.on('exit', crashed);
   return w;
 }
 

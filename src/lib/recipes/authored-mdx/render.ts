@@ -49,7 +49,12 @@ function placeIslands(tree: HastRoot, islands: PlacedIsland[]): void {
       node.children = [{ type: 'text', value: '(calculator missing)' }];
       return;
     }
-    node.properties = { className: ['authored-island'], dataIsland: island.name, dataProps: JSON.stringify(island.props) };
+    node.properties = { className: ['authored-island'], dataIsland: island.name, dataProps: jsonForAttribute(island.props) };
     node.children = [{ type: 'element', tagName: 'p', properties: { className: ['island-fallback'] }, children: [{ type: 'text', value: `${island.name} calculator (loading…)` }] }];
   });
+}
+
+/** JSON with <, > and & as \u escapes: the same value when parsed, and no markup-like text in the page. */
+function jsonForAttribute(value: unknown): string {
+  return JSON.stringify(value).replace(/[<>&]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
