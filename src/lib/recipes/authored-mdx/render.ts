@@ -30,7 +30,7 @@ export function renderTree(tree: MdastRoot, islands: PlacedIsland[]): string {
       } as Record<string, (state: State, node: never) => ElementContent | undefined>,
     })
     // A fresh options object per body: KaTeX's \gdef writes into `macros`, which must never be shared.
-    .use(rehypeKatex, { trust: false, strict: 'ignore', throwOnError: false, maxSize: KATEX_LIMITS.maxSize, maxExpand: KATEX_LIMITS.maxExpand, macros: {} })
+    .use(rehypeKatex, { trust: false, strict: 'ignore', throwOnError: false, maxSize: KATEX_LIMITS.maxSize, maxExpand: KATEX_LIMITS.maxExpand, macros: {} } as Parameters<typeof rehypeKatex>[0])
     .use(rehypeSanitize, AUTHORED_SANITIZE_SCHEMA)
     .use(() => (hast: HastRoot) => placeIslands(hast, islands))
     .use(rehypeStringify);
