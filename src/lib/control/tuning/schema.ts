@@ -73,3 +73,14 @@ export interface TuneResult {
   /** The publication the formulas come from. */
   source: string;
 }
+
+/** A comparison of every applicable rule for one process model. */
+export const CompareRequestSchema = z.object({
+  /** The process model the rules tune and the figures are predicted on. */
+  model: z.discriminatedUnion('type', [FopdtSchema, SopdtSchema, IpdtSchema]),
+  controller: ControllerKindSchema,
+  options: TuneOptionsSchema.optional(),
+  /** Derivative filter divisor for the predicted loops (filter time td/n); default 10. */
+  n: z.number().positive().max(1000).optional(),
+});
+export type CompareRequest = z.input<typeof CompareRequestSchema>;
