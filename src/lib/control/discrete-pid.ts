@@ -6,6 +6,8 @@
  */
 import { z } from 'zod';
 import { PidControllerSchema } from '../schemas/controller';
+import { pidToTransferFunction } from './pid';
+import { multiply, trim } from './polynomial';
 import { parseRequest } from './request-error';
 import { ModelError } from './types';
 
@@ -34,36 +36,6 @@ export interface DiscretePid {
   transferFunction: { num: number[]; den: number[] };
 }
 
-type Rational = { num: number[]; den: number[] };
-
-/** C(s) as num/den in descending powers of s for each contract form. */
-export function controllerTransferFunction(c: z.infer<typeof PidControllerSchema>): Rational {
-  if (c.form === 'parallel') {
-    const ki = c.ki ?? 0;
-    const kd = c.kd ?? 0;
-    const tf = c.tf ?? 0;
-    if (ki === 0) return { num: [c.kp * tf + kd, c.kp], den: [tf, 1] };
-    return { num: [c.kp * tf + kd, c.kp + ki * tf, ki], den: [tf, 1, 0] };
-  }
-  const ti = c.ti ?? 0;
-  const td = c.td ?? 0;
-  const tf = td / (c.n ?? 10);
-  const k = c.kc;
-  if (c.form === 'ideal') {
-    if (ti === 0) return { num: [k * (tf + td), k], den: [tf, 1] };
-    return { num: [k * ti * (tf + td), k * (ti + tf), k], den: [ti * tf, ti, 0] };
-  }
-  // series: kc·(ti·s + 1)(td·s + 1)/(ti·s·(tf·s + 1))
-  if (ti === 0) return { num: [k * td, k], den: [tf, 1] };
-  return { num: [k * ti * td, k * (ti + td), k], den: [ti * tf, ti, 0] };
-}
-
-function multiply(a: readonly number[], b: readonly number[]): number[] {
-  const out = new Array<number>(a.length + b.length - 1).fill(0);
-  for (let i = 0; i < a.length; i++) for (let j = 0; j < b.length; j++) out[i + j] += a[i] * b[j];
-  return out;
-}
-
 /** p(s) with s replaced, times the common factor; result ascending in q = z⁻¹, length order+1. */
 function substitute(p: number[], order: number, method: DiscretePid['method'], ts: number): number[] {
   let out = new Array<number>(order + 1).fill(0);
@@ -85,12 +57,6 @@ function trimHigh(p: number[]): number[] {
   const out = p.slice();
   while (out.length > 1 && out[out.length - 1] === 0) out.pop();
   return out;
-}
-
-function trimLeadingZeros(p: number[]): number[] {
-  let i = 0;
-  while (i < p.length - 1 && p[i] === 0) i++;
-  return p.slice(i);
 }
 
 /** a(q)/(1 − q) when a has that factor (integral action), else null. */
@@ -132,9 +98,9 @@ export function discretePid(controller: unknown, ts: number, options: DiscretePi
     throw new ModelError('The sample time ts must be a positive number of seconds.', 'invalid_request', 'ts');
   }
   const { method, form } = parseRequest(DiscretePidOptionsSchema, options);
-  const g = controllerTransferFunction(c);
-  const num = trimLeadingZeros(g.num);
-  const den = trimLeadingZeros(g.den);
+  const g = pidToTransferFunction(c, 'controller');
+  const num = trim(g.num);
+  const den = trim(g.den);
   if (method === 'tustin' && num.length > den.length) {
     throw new ModelError('Tustin needs a derivative filter: give tf > 0 (or n) or use backward Euler.', 'invalid_request', 'controller.tf');
   }

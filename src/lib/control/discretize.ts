@@ -1,13 +1,16 @@
 /**
  * Discrete-time equivalents of a transfer function (POST /api/v1/calc/discretize): zero-order
- * hold (exact, via the matrix exponential of the controllable canonical state-space form) and
+ * hold (exact, via the matrix exponential of the engine's state-space form) and
  * Tustin (bilinear, optionally pre-warped). The dead time becomes whole samples z^(−d).
  * Results are in descending powers of z with den[0] = 1.
  */
 import { z } from 'zod';
 import { TransferFunctionSchema } from '../schemas/transfer-function';
-import { characteristicPolynomial, expm, type Matrix } from './discrete-linalg';
+import { characteristicPolynomial, type Matrix } from './characteristic-polynomial';
+import { discretize as holdEquivalent, toStateSpace } from './state-space';
+import { multiply } from './polynomial';
 import { parseRequest } from './request-error';
+import { createTransferFunction } from './transfer-function';
 import { ModelError } from './types';
 
 export const DiscretizeRequestSchema = z.object({
@@ -25,34 +28,6 @@ export interface DiscreteTransferFunction {
   num: number[];
   den: number[];
   delaySamples: number;
-}
-
-function trimLeading(p: readonly number[]): number[] {
-  let i = 0;
-  while (i < p.length - 1 && p[i] === 0) i++;
-  return p.slice(i);
-}
-
-function polyMul(a: readonly number[], b: readonly number[]): number[] {
-  const out = new Array<number>(a.length + b.length - 1).fill(0);
-  for (let i = 0; i < a.length; i++) for (let j = 0; j < b.length; j++) out[i + j] += a[i] * b[j];
-  return out;
-}
-
-/** Checked, trimmed rational part; the contract's invalid_model cases name their field. */
-function rationalPart(g: { num: number[]; den: number[] }): { num: number[]; den: number[] } {
-  const den = trimLeading(g.den);
-  const num = trimLeading(g.num);
-  if (den.every((c) => c === 0)) {
-    throw new ModelError('The denominator is all zeros; give at least one non-zero coefficient.', 'invalid_model', 'tf.den');
-  }
-  if (den.length > 21 || num.length > 21) {
-    throw new ModelError('The transfer function has order above 20; at most 20 is supported.', 'invalid_model', num.length > 21 ? 'tf.num' : 'tf.den');
-  }
-  if (num.length > den.length) {
-    throw new ModelError('The numerator has a higher order than the denominator (improper); add poles or a filter.', 'invalid_model', 'tf.num');
-  }
-  return { num, den };
 }
 
 /** The dead time as whole samples, or ModelError when it is not one within 1e-9 (relative). */
@@ -87,25 +62,20 @@ function normalize(num: number[], den: number[], delaySamples: number): Discrete
 }
 
 /**
- * Zero-order hold: with (A, B, C, D) the controllable canonical form of num/den,
- * [[Ad, Bd], [0, 1]] = exp([[A, B], [0, 0]]·ts); den(z) = det(zI − Ad) and
- * num(z) = det(zI − Ad + Bd·C) + (D − 1)·den(z) (the SISO state-space-to-TF identity).
+ * Zero-order hold: with (A, B, C, D) the engine's balanced state-space form of num/den,
+ * Ad = e^(A·ts) and Bd = ∫₀^ts e^(A·τ)dτ·B (state-space.ts, exact by the matrix exponential);
+ * den(z) = det(zI − Ad) and num(z) = det(zI − Ad + Bd·C) + (D − 1)·den(z) (the SISO
+ * state-space-to-TF identity).
  */
 function zoh(num: number[], den: number[], ts: number): { num: number[]; den: number[] } {
   const n = den.length - 1;
   if (n === 0) return { num: [num[0] / den[0]], den: [1] };
-  const a0 = den[0];
-  const monic = den.map((c) => c / a0);
-  const padded = [...new Array<number>(den.length - num.length).fill(0), ...num.map((c) => c / a0)];
-  const d = padded[0];
-  const c = padded.slice(1).map((v, i) => v - d * monic[i + 1]);
-  const m: Matrix = Array.from({ length: n + 1 }, () => new Array<number>(n + 1).fill(0));
-  for (let j = 0; j < n; j++) m[0][j] = -monic[j + 1] * ts;
-  for (let i = 1; i < n; i++) m[i][i - 1] = ts;
-  m[0][n] = ts;
-  const e = expm(m);
-  const ad = e.slice(0, n).map((row) => row.slice(0, n));
-  const bd = e.slice(0, n).map((row) => row[n]);
+  const ss = toStateSpace({ num, den, delay: 0 });
+  const hold = holdEquivalent(ss, ts);
+  const c = ss.c[0];
+  const d = ss.d[0];
+  const ad: Matrix = Array.from({ length: n }, (_, i) => Array.from(hold.phi.subarray(i * n, (i + 1) * n)));
+  const bd = Array.from({ length: n }, (_, i) => hold.g0[i] + hold.g1[i]);
   const closed = ad.map((row, i) => row.map((v, j) => v - bd[i] * c[j]));
   const dz = characteristicPolynomial(ad);
   const nz = characteristicPolynomial(closed).map((v, i) => v + (d - 1) * dz[i]);
@@ -121,8 +91,8 @@ function tustin(num: number[], den: number[], k: number): { num: number[]; den: 
     p.forEach((coef, idx) => {
       const power = degree - idx;
       let term = [coef * k ** power];
-      for (let i = 0; i < power; i++) term = polyMul(term, [1, -1]);
-      for (let i = 0; i < order - power; i++) term = polyMul(term, [1, 1]);
+      for (let i = 0; i < power; i++) term = multiply(term, [1, -1]);
+      for (let i = 0; i < order - power; i++) term = multiply(term, [1, 1]);
       out = out.map((v, i) => v + term[i]);
     });
     return out;
@@ -147,7 +117,7 @@ export function discretize(input: DiscretizeRequest | unknown): DiscreteTransfer
   const request = parseRequest(DiscretizeRequestSchema, input, (field) =>
     field.startsWith('tf.') ? 'invalid_model' : 'invalid_request',
   );
-  const { num, den } = rationalPart(request.tf);
+  const { num, den } = createTransferFunction(request.tf, { field: 'tf' });
   const delaySamples = delayInSamples(request.tf.delay, request.ts);
   if (request.method === 'zoh') {
     if (request.prewarp !== undefined) {
