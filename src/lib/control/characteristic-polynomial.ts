@@ -42,7 +42,7 @@ function hessenberg(a: Matrix): Matrix {
  * and the La Budde recurrence (Wilkinson, The Algebraic Eigenvalue Problem, §6.57): stable where
  * Faddeev–LeVerrier is not.
  */
-export function characteristicPolynomial(a: Matrix): number[] {
+export function matrixCharacteristicPolynomial(a: Matrix): number[] {
   const n = a.length;
   const h = hessenberg(a);
   // p[k] is the characteristic polynomial of the leading k×k block, ascending storage.

@@ -6,8 +6,8 @@
  */
 import { z } from 'zod';
 import { TransferFunctionSchema } from '../schemas/transfer-function';
-import { characteristicPolynomial, type Matrix } from './characteristic-polynomial';
-import { discretize as holdEquivalent, toStateSpace } from './state-space';
+import { matrixCharacteristicPolynomial, type Matrix } from './characteristic-polynomial';
+import { discretizeStates as holdEquivalent, toStateSpace } from './state-space';
 import { multiply } from './polynomial';
 import { parseRequest } from './request-error';
 import { createTransferFunction } from './transfer-function';
@@ -77,8 +77,8 @@ function zoh(num: number[], den: number[], ts: number): { num: number[]; den: nu
   const ad: Matrix = Array.from({ length: n }, (_, i) => Array.from(hold.phi.subarray(i * n, (i + 1) * n)));
   const bd = Array.from({ length: n }, (_, i) => hold.g0[i] + hold.g1[i]);
   const closed = ad.map((row, i) => row.map((v, j) => v - bd[i] * c[j]));
-  const dz = characteristicPolynomial(ad);
-  const nz = characteristicPolynomial(closed).map((v, i) => v + (d - 1) * dz[i]);
+  const dz = matrixCharacteristicPolynomial(ad);
+  const nz = matrixCharacteristicPolynomial(closed).map((v, i) => v + (d - 1) * dz[i]);
   return { num: nz, den: dz };
 }
 

@@ -20,3 +20,18 @@ export { margins, reduceDeg } from './margins';
 export { rootInfo, closedLoopStable, openPathStable, nyquistUnstableCount, characteristicPolynomial, type RootInfo } from './stability';
 export { analyze, type AnalyzeRequest, type AnalyzeResponse } from './analyze';
 export { checkAnalyses, type AnalysesRequest } from './analyze-request';
+// Tuning rules as data and zod-free tuning (for islands). The request-validating entries are
+// separate so that the islands' engine stays free of zod and mathjs: `./tuning` (tune,
+// compareRules via `./tuning/compare`), `./discretize`, `./discrete-pid`, `./identify`, `./parse`.
+export {
+  tuningRules,
+  ruleById,
+  ruleCase,
+  applicableRules,
+  rangeCheck,
+  designController,
+  type TuningRule,
+  type RuleCase,
+  type RuleRange,
+} from './tuning/rules';
+export type { TuneResult, TunedController, TuningModel, RuleId, ControllerKind, TuneOptions } from './tuning/schema';

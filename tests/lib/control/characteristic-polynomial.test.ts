@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { characteristicPolynomial } from '../../../src/lib/control/characteristic-polynomial';
+import { matrixCharacteristicPolynomial } from '../../../src/lib/control/characteristic-polynomial';
 
-describe('characteristicPolynomial', () => {
+describe('matrixCharacteristicPolynomial', () => {
   const c = Math.cos(0.7);
   const s = Math.sin(0.7);
   const rows = [
@@ -12,7 +12,7 @@ describe('characteristicPolynomial', () => {
     { name: 'full 3×3 [[2,1,0],[1,3,1],[0,1,4]]: trace 9, principal minors 5+8+11 = 24, det 18', a: [[2, 1, 0], [1, 3, 1], [0, 1, 4]], expected: [1, -9, 24, -18] },
   ];
   it.each(rows)('$name', ({ a, expected }) => {
-    const p = characteristicPolynomial(a);
+    const p = matrixCharacteristicPolynomial(a);
     expect(p.length).toBe(expected.length);
     p.forEach((v, i) => expect(v).toBeCloseTo(expected[i], 12));
   });

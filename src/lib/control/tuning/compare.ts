@@ -11,7 +11,7 @@ import { errorIntegrals } from '../error-integrals';
 import { fromProcessModel } from '../process-model';
 import { ModelError, type PidController, type ProcessModel } from '../types';
 import { parseRequest } from '../request-error';
-import { ruleCase, rangeCheck, tuningRules } from './index';
+import { ruleCase, rangeCheck, tuningRules } from './rules';
 import type { TuningRule } from './rule';
 import { CompareRequestSchema, type CompareRequest, type TunedController, type TuningModel } from './schema';
 

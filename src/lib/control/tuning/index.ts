@@ -1,83 +1,17 @@
-import { ModelError } from '../types';
+/** Tuning (POST /api/v1/calc/tune): request validation on top of the rules in rules.ts. */
 import { parseRequest } from '../request-error';
-import { amigo } from './amigo';
-import { cohenCoon } from './cohen-coon';
-import { imc } from './imc';
-import { lambda } from './lambda';
-import type { RuleCase, TuningRule } from './rule';
-import { TuneRequestSchema, type RuleId, type TuneRequest, type TuneResult, type TuningModel } from './schema';
-import { simc } from './simc';
-import { zieglerNicholsOpenLoop, zieglerNicholsUltimate } from './ziegler-nichols';
+import { designController } from './rules';
+import { TuneRequestSchema, type TuneRequest, type TuneResult } from './schema';
 
-export type { RuleCase, RuleRange, TuningRule } from './rule';
+export * from './rules';
 export * from './schema';
 
-/** Every rule, in the order the product lists them. */
-export const tuningRules: readonly TuningRule[] = [
-  simc,
-  lambda,
-  imc,
-  zieglerNicholsOpenLoop,
-  zieglerNicholsUltimate,
-  cohenCoon,
-  amigo,
-];
-
-export function ruleById(id: RuleId): TuningRule {
-  const rule = tuningRules.find((r) => r.id === id);
-  if (!rule) throw new ModelError(`Unknown tuning rule "${id}".`, 'invalid_request', 'rule');
-  return rule;
-}
-
-/** The case of `rule` for this model type and controller, or a ModelError naming what to change. */
-export function ruleCase(rule: TuningRule, modelType: TuningModel['type'], controller: 'pi' | 'pid'): RuleCase {
-  const forModel = rule.cases.filter((c) => c.model === modelType);
-  if (forModel.length === 0) {
-    const types = [...new Set(rule.cases.map((c) => c.model))].join(' or ');
-    throw new ModelError(`${rule.name} tunes ${types} models, not ${modelType}.`, 'invalid_request', 'model.type');
-  }
-  const match = forModel.find((c) => c.controller === controller);
-  if (!match) {
-    const kinds = forModel.map((c) => c.controller.toUpperCase()).join(' or ');
-    throw new ModelError(
-      `${rule.name} gives ${kinds} settings for a ${modelType} model; ask for that controller.`,
-      'invalid_request',
-      'controller',
-    );
-  }
-  return match;
-}
-
-/** Rules that cover this model type and controller. */
-export function applicableRules(modelType: TuningModel['type'], controller: 'pi' | 'pid'): TuningRule[] {
-  return tuningRules.filter((r) => r.cases.some((c) => c.model === modelType && c.controller === controller));
-}
-
 /**
- * Tunes a PI or PID controller by a published rule (POST /api/v1/calc/tune). Validates the
- * request with zod and answers ModelError('invalid_request') for any combination the contract's
- * applicability table does not list.
+ * Tunes a PI or PID controller by a published rule. Validates the request with zod and answers
+ * ModelError('invalid_request') for any combination the contract's applicability table does not
+ * list (field `rule`, `model.type` or `controller`).
  */
 export function tune(input: TuneRequest | unknown): TuneResult {
   const request = parseRequest(TuneRequestSchema, input);
-  const rule = ruleById(request.rule);
-  const { form } = ruleCase(rule, request.model.type, request.controller);
-  const settings = rule.design(request.model, request.controller, request.options ?? {});
-  for (const [key, value] of Object.entries(settings)) {
-    if (!Number.isFinite(value)) {
-      throw new ModelError(`${rule.name} gives no finite ${key} for this model.`, 'invalid_request', 'model');
-    }
-  }
-  return { controller: { form, ...settings }, rule: rule.id, source: rule.source };
-}
-
-/** Whether θ/τ lies in the rule's stated range; null ratio for models without one. */
-export function rangeCheck(rule: TuningRule, model: TuningModel): { thetaOverTau: number | null; inRange: boolean } {
-  const ratio =
-    model.type === 'fopdt' ? model.theta / model.tau : model.type === 'sopdt' ? model.theta / model.tau1 : null;
-  const bounds = rule.range.thetaOverTau;
-  if (ratio === null || bounds === null) return { thetaOverTau: ratio, inRange: true };
-  const aboveMin = bounds.min === null || ratio >= bounds.min;
-  const belowMax = bounds.max === null || ratio <= bounds.max;
-  return { thetaOverTau: ratio, inRange: aboveMin && belowMax };
+  return designController(request.model, request.rule, request.controller, request.options ?? {});
 }
