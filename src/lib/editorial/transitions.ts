@@ -9,6 +9,7 @@ import { loadForWrite, recipeLink, reload } from './load';
 import { mails } from './notify';
 import { TRANSITIONS, type Transition } from './status';
 import { frontmatterOf } from './view';
+import { loopOwnerNotices } from '../fielddata/service/retire';
 
 /** What a transition carries: a curator's comment (return) or a reason and successor (retire). */
 export interface TransitionInput {
@@ -65,6 +66,7 @@ export async function transitionRecipe(ctx: EditorialContext, actor: Actor, slug
     const successor = input.supersededBy ? recipeLink(ctx, input.supersededBy) : null;
     for (const to of owner) out.push(mails.retiredOwner(to, title, input.reason ?? '', successor, link));
     for (const to of await watcherEmails(ctx.knex, slug, actor.id)) if (!owner.includes(to)) out.push(mails.watchedRetired(to, title, input.reason ?? '', successor, link));
+    out.push(...(await loopOwnerNotices(ctx.knex, { slug, title, reason: input.reason ?? '', supersededBy: input.supersededBy ?? null, retiredBy: actor.name, siteUrl: ctx.siteUrl })));
   }
   await afterCommit(ctx, out, kind === 'publish' || kind === 'retire' ? slug : null);
   return reload(ctx.knex, slug);
