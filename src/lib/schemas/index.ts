@@ -3,3 +3,4 @@ export * from './transfer-function';
 export * from './controller';
 export * from './process-model';
 export * from './claim';
+export * from './block';

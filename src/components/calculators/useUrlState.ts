@@ -1,0 +1,45 @@
+import { useCallback, useEffect, useRef, useState } from 'react';
+import type { z } from 'zod';
+import { readState, writeState } from '../../lib/calculators/url-state';
+
+/** How long the address waits after the last change before it is rewritten, ms. */
+const WRITE_DELAY_MS = 250;
+
+/**
+ * State kept in the page address under the island's own parameter. The first render uses
+ * `initial` (so the server's HTML and hydration agree); right after hydration a shared link's
+ * state, if valid, replaces it. Changes are written with history.replaceState, debounced; the
+ * parameter is removed when the state is back to `initial`.
+ */
+export function useUrlState<S extends z.ZodType>(id: string, schema: S, initial: z.infer<S>) {
+  type State = z.infer<S>;
+  const [state, setState] = useState<State>(initial);
+  const initialJson = useRef(JSON.stringify(initial));
+  const restored = useRef(false);
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+
+  useEffect(() => {
+    const fromLink = readState(window.location.search, id, schema);
+    if (fromLink !== null) setState(fromLink);
+    restored.current = true;
+  }, [id, schema]);
+
+  useEffect(() => {
+    if (!restored.current) return;
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(() => {
+      const atDefault = JSON.stringify(state) === initialJson.current;
+      const next = writeState(window.location.href, id, atDefault ? null : state);
+      window.history.replaceState(window.history.state, '', next);
+    }, WRITE_DELAY_MS);
+    return () => {
+      if (timer.current) clearTimeout(timer.current);
+    };
+  }, [id, state]);
+
+  const update = useCallback((change: Partial<State> | ((s: State) => State)) => {
+    setState((s: State) => (typeof change === 'function' ? change(s) : { ...s, ...change }));
+  }, []);
+
+  return { state, setState, update };
+}
