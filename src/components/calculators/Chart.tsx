@@ -10,8 +10,18 @@ export interface ChartSeries {
   /** Dash pattern in px, e.g. [6, 4]; solid when absent. */
   dash?: number[];
   width?: number;
-  /** Shown in the legend and read-out with this many significant digits. */
+  /** The unit shown after values in the cursor read-out. */
   unit?: string;
+  /** Draw the samples as dots without a line (a single point such as −1 on a Nyquist plot). */
+  dots?: boolean;
+}
+
+/** Bounds an automatic axis may not pass (the phase of a long dead time, a Nyquist curve running off to infinity). */
+export interface AxisRange {
+  min?: number;
+  max?: number;
+  /** Show exactly min to max whatever the data (a Nyquist view around −1). */
+  fixed?: boolean;
 }
 
 /** A straight guide line: a crossover frequency, a setpoint, a claim's bound. */
@@ -34,7 +44,11 @@ export interface ChartProps {
   logX?: boolean;
   /** xy curves (Nyquist) instead of series over a shared x. */
   xy?: boolean;
+  /** As tall as wide (up to `height`), so equal spans on both axes keep circles round. */
+  square?: boolean;
   markers?: ChartMarker[];
+  xRange?: AxisRange;
+  yRange?: AxisRange;
   /** Receives the chart when it is created (null when it goes), for PNG export. */
   onChart?: (chart: uPlot | null) => void;
   testId?: string;
@@ -46,12 +60,24 @@ function readout(value: number | null, unit?: string): string {
   return unit ? `${text} ${unit}` : text;
 }
 
+/** A uPlot range function: the data's extent padded 5 %, but never beyond the given bounds. */
+function limit(range: AxisRange): uPlot.Range.Function {
+  return (_u, dataMin, dataMax) => {
+    if (range.fixed && range.min !== undefined && range.max !== undefined) return [range.min, range.max];
+    const span = Math.abs(dataMax - dataMin) || Math.abs(dataMax) || 1;
+    const lo = Math.max(dataMin - 0.05 * span, range.min ?? -Infinity);
+    const hi = Math.min(dataMax + 0.05 * span, range.max ?? Infinity);
+    return hi > lo ? [lo, hi] : [lo, lo + 1];
+  };
+}
+
 function drawMarkers(u: uPlot, markers: readonly ChartMarker[], palette: Record<ChartColor, string>) {
   const { ctx, bbox } = u;
   ctx.save();
   ctx.lineWidth = 1.5 * devicePixelRatio;
   ctx.setLineDash([4 * devicePixelRatio, 4 * devicePixelRatio]);
   ctx.font = `${11 * devicePixelRatio}px "IBM Plex Mono", monospace`;
+  let row = 0;
   for (const m of markers) {
     ctx.strokeStyle = ctx.fillStyle = palette[m.color];
     ctx.beginPath();
@@ -61,7 +87,7 @@ function drawMarkers(u: uPlot, markers: readonly ChartMarker[], palette: Record<
       ctx.moveTo(x, bbox.top);
       ctx.lineTo(x, bbox.top + bbox.height);
       ctx.stroke();
-      ctx.fillText(m.label, x + 4 * devicePixelRatio, bbox.top + 12 * devicePixelRatio);
+      ctx.fillText(m.label, x + 4 * devicePixelRatio, bbox.top + (12 + 14 * row++) * devicePixelRatio);
     } else {
       const y = u.valToPos(m.value, 'y', true);
       if (!(y >= bbox.top && y <= bbox.top + bbox.height)) continue;
@@ -80,14 +106,20 @@ function drawMarkers(u: uPlot, markers: readonly ChartMarker[], palette: Record<
  * can time recompute-and-redraw. The reserved height keeps the page from jumping at hydration.
  */
 export default function Chart(props: ChartProps) {
-  const { title, xLabel, yLabel, series, data, height = 260, logX = false, xy = false, markers = [], onChart, testId } = props;
+  const { title, xLabel, yLabel, series, data, height = 260, logX = false, xy = false, markers = [], xRange, yRange, square = false, onChart, testId } = props;
   const box = useRef<HTMLDivElement>(null);
   const chart = useRef<uPlot | null>(null);
   const markerRef = useRef(markers);
   markerRef.current = markers;
   const dataRef = useRef(data);
   dataRef.current = data;
-  const shape = JSON.stringify({ series, logX, xy, xLabel, yLabel, height });
+  const shape = JSON.stringify({ series, logX, xy, xLabel, yLabel, height, xRange, yRange, square });
+  const sizeOf = (el: HTMLElement) => {
+    const width = Math.max(200, el.clientWidth);
+    if (!square) return { width, height };
+    const side = Math.min(width, height);
+    return { width: side, height: side };
+  };
 
   useEffect(() => {
     const el = box.current;
@@ -100,10 +132,12 @@ export default function Chart(props: ChartProps) {
       const grid = palette.rule;
       const axis = { stroke: ink, grid: { stroke: grid, width: 1 }, ticks: { stroke: grid, width: 1 }, font: '12px "IBM Plex Mono", monospace', labelFont: '12px "Literata", serif' };
       const opts: uPlot.Options = {
-        width: Math.max(200, el.clientWidth),
-        height,
+        ...sizeOf(el),
         mode: xy ? 2 : 1,
-        scales: xy ? { x: { time: false, auto: true }, y: { auto: true } } : { x: { time: false, distr: logX ? 3 : 1 } },
+        scales: {
+          x: { time: false, distr: logX ? 3 : 1, ...(xRange ? { range: limit(xRange) } : {}) },
+          y: yRange ? { range: limit(yRange) } : {},
+        },
         axes: [
           { ...axis, label: xLabel },
           { ...axis, label: yLabel, size: 56 },
@@ -117,7 +151,8 @@ export default function Chart(props: ChartProps) {
             stroke: palette[s.color],
             width: s.width ?? 2,
             dash: s.dash,
-            points: { show: false },
+            points: s.dots ? { show: true, size: 8, fill: palette[s.color] } : { show: false },
+            ...(s.dots ? { paths: () => null } : {}),
             value: (_u: uPlot, v: number | null) => readout(v, s.unit),
             ...(xy ? { facets: [{ scale: 'x', auto: true }, { scale: 'y', auto: true }] } : {}),
           })),
@@ -129,8 +164,8 @@ export default function Chart(props: ChartProps) {
     };
     create();
     const resize = new ResizeObserver(() => {
-      const width = Math.max(200, el.clientWidth);
-      if (chart.current && chart.current.width !== width) chart.current.setSize({ width, height });
+      const size = sizeOf(el);
+      if (chart.current && chart.current.width !== size.width) chart.current.setSize(size);
     });
     resize.observe(el);
     const palette = new MutationObserver(() => {

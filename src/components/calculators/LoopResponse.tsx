@@ -1,7 +1,7 @@
 import { useMemo, useRef } from 'react';
 import type uPlot from 'uplot';
 import { z } from 'zod';
-import { analyzeLoop, modelToTf, type LoopResult } from '../../lib/calculators/loop';
+import { analyzeLoop, type LoopResult } from '../../lib/calculators/loop';
 import { checkClaims } from '../../lib/calculators/claims';
 import { settingsText, DEFAULT_UNITS } from '../../lib/calculators/pid-display';
 import { PidControllerSchema, type PidControllerInput } from '../../lib/schemas/controller';
@@ -13,10 +13,9 @@ import Chart from './Chart';
 import ClaimList from './ClaimList';
 import ExportBar from './ExportBar';
 import NumberField from './NumberField';
-import ParamControl from './ParamControl';
+import LoopControls from './LoopControls';
 import StepFacts from './StepFacts';
 import { describeError } from './describe-error';
-import { controllerFields, modelFields, sliderRange } from './model-fields';
 import { useCalcUpdate } from './useCalcUpdate';
 import { useUrlState } from './useUrlState';
 import './calculators.css';
@@ -55,14 +54,6 @@ function compute(state: State, sensor: TransferFunctionInput | undefined, horizo
   }
 }
 
-/** A time scale of the model, s, to size sliders of settings that start at 0. */
-function modelScale(model: ProcessModelInput): number {
-  if (model.type === 'fopdt') return model.tau + model.theta;
-  if (model.type === 'sopdt') return model.tau1 + model.tau2 + model.theta;
-  if (model.type === 'ipdt') return Math.max(model.theta * 10, 10);
-  return Math.max(1, modelToTf(model).delay * 5);
-}
-
 /** Closed-loop setpoint and load steps with live settings, step figures and the recipe's claims. */
 export default function LoopResponse(props: LoopResponseProps) {
   const { model, controller, sensor, claims = [], tFinal, id = 'loop-response', title = 'Loop response' } = props;
@@ -97,11 +88,6 @@ export default function LoopResponse(props: LoopResponseProps) {
     begin();
     update((s) => ({ ...s, controller: { ...s.controller, [key]: value } as PidControllerInput }));
   };
-  const scale = modelScale(model);
-  const modelValues = state.model as unknown as Record<string, number>;
-  const controllerValues = state.controller as unknown as Record<string, number>;
-  const initialModel = model as unknown as Record<string, number>;
-  const initialController = controller as unknown as Record<string, number>;
 
   const copyText = () => {
     const m = state.model;
@@ -120,38 +106,15 @@ export default function LoopResponse(props: LoopResponseProps) {
       </div>
       <div className="calc-grid">
         <div className="calc-controls">
-          <fieldset className="calc-group">
-            <legend>Process</legend>
-            {modelFields(state.model).map((f) => (
-              <ParamControl
-                key={f.key}
-                label={f.label}
-                kind={f.kind}
-                unit={f.unit}
-                min={f.min}
-                value={modelValues[f.key] ?? 0}
-                range={sliderRange(f, initialModel[f.key] ?? 0, scale)}
-                onChange={(v) => setModel(f.key, v)}
-                testId={`${id}-${f.key}`}
-              />
-            ))}
-          </fieldset>
-          <fieldset className="calc-group">
-            <legend>Controller ({state.controller.form})</legend>
-            {controllerFields(state.controller).map((f) => (
-              <ParamControl
-                key={f.key}
-                label={f.label}
-                kind={f.kind}
-                unit={f.unit}
-                min={f.min}
-                value={controllerValues[f.key] ?? 0}
-                range={sliderRange(f, initialController[f.key] ?? 0, scale)}
-                onChange={(v) => setController(f.key, v)}
-                testId={`${id}-${f.key}`}
-              />
-            ))}
-          </fieldset>
+          <LoopControls
+            id={id}
+            model={state.model}
+            controller={state.controller}
+            initialModel={model}
+            initialController={controller}
+            onModel={setModel}
+            onController={setController}
+          />
           <NumberField
             label="Horizon"
             kind="time"

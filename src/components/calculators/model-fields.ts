@@ -57,3 +57,11 @@ export function sliderRange(spec: FieldSpec, start: number, scale: number): { mi
   const base = start > 0 ? start : 1;
   return { min: base / 4, max: base * 4, log: true };
 }
+
+/** A time scale of the model in s, to size sliders of settings that start at 0. */
+export function modelScale(model: ProcessModelInput): number {
+  if (model.type === 'fopdt') return model.tau + model.theta;
+  if (model.type === 'sopdt') return model.tau1 + model.tau2 + model.theta;
+  if (model.type === 'ipdt') return Math.max(model.theta * 10, 10);
+  return Math.max(1, (model.delay ?? 0) * 5);
+}

@@ -34,3 +34,19 @@ export function transferFunctionLatex(tf: { num: readonly number[]; den: readonl
   const exponent = `e^{-${formatNumber(delay)}\\,s}`;
   return rational === '1' ? exponent : `${rational}\\,${exponent}`;
 }
+
+/** A polynomial as plain text, e.g. [150, 35, 1] → "150 s^2 + 35 s + 1". */
+export function polynomialText(coefficients: readonly number[]): string {
+  return polynomialLatex(coefficients)
+    .replace(/\\times10\^\{(-?\d+)\}/g, 'e$1')
+    .replace(/\\,/g, ' ')
+    .replace(/s\^\{(\d+)\}/g, 's^$1');
+}
+
+/** num/den·e^(−delay·s) as plain text, shown before the typeset formula is ready. */
+export function transferFunctionText(tf: { num: readonly number[]; den: readonly number[]; delay?: number }): string {
+  const den = polynomialText(tf.den);
+  const rational = den === '1' ? polynomialText(tf.num) : `(${polynomialText(tf.num)}) / (${den})`;
+  const delay = tf.delay ?? 0;
+  return delay > 0 ? `${rational} · e^(−${formatNumber(delay)} s)` : rational;
+}

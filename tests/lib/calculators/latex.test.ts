@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import katex from 'katex';
-import { polynomialLatex, transferFunctionLatex } from '../../../src/lib/calculators/latex';
+import { polynomialLatex, transferFunctionLatex, transferFunctionText } from '../../../src/lib/calculators/latex';
 
 describe('polynomialLatex', () => {
   it('writes descending powers, skips zero terms and leaves out unit coefficients', () => {
@@ -22,5 +22,12 @@ describe('transferFunctionLatex', () => {
   it('drops a unit denominator and a unit gain before a pure delay', () => {
     expect(transferFunctionLatex({ num: [0.8], den: [1] })).toBe('0.8');
     expect(transferFunctionLatex({ num: [1], den: [1], delay: 6 })).toBe('e^{-6\\,s}');
+  });
+});
+
+describe('transferFunctionText', () => {
+  it('writes the same transfer function as plain text', () => {
+    expect(transferFunctionText({ num: [2.5], den: [150, 35, 1], delay: 4 })).toBe('(2.5) / (150 s^2 + 35 s + 1) · e^(−4 s)');
+    expect(transferFunctionText({ num: [0.8], den: [1] })).toBe('0.8');
   });
 });
