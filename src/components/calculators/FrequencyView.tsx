@@ -67,7 +67,7 @@ export default function FrequencyView({ model, controller, sensor, id = 'frequen
   const begin = useCalcUpdate([computed]);
 
   const data = useMemo(() => {
-    if (!computed.ok) return { mag: [[], []] as uPlot.AlignedData, phase: [[], []] as uPlot.AlignedData, nyquist: [null, [[], []], [[], []], [[], []]] };
+    if (!computed.ok) return { mag: [[], []] as uPlot.AlignedData, phase: [[], []] as uPlot.AlignedData, nyquist: [null, [[], []], [[], []], [[], []]] as (null | [number[], number[]])[] };
     const r = computed.r;
     return {
       mag: [r.w, r.magDb] as uPlot.AlignedData,

@@ -40,7 +40,7 @@ export async function chartsToPng(charts: ReadonlyArray<{ title: string; chart: 
     let x = pad;
     ctx.font = `${11 * ratio}px "IBM Plex Mono", monospace`;
     chart.series.forEach((s, i) => {
-      if (i === 0 && chart.mode !== 2) return;
+      if (i === 0 && (chart as unknown as { mode?: number }).mode !== 2) return;
       if (!s.label || typeof s.stroke !== 'string') return;
       ctx.fillStyle = s.stroke;
       ctx.fillRect(x, y + 24 * ratio, 14 * ratio, 4 * ratio);

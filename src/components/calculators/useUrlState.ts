@@ -38,7 +38,7 @@ export function useUrlState<S extends z.ZodType>(id: string, schema: S, initial:
   }, [id, state]);
 
   const update = useCallback((change: Partial<State> | ((s: State) => State)) => {
-    setState((s: State) => (typeof change === 'function' ? change(s) : { ...s, ...change }));
+    setState((s: State) => (typeof change === 'function' ? change(s) : ({ ...(s as object), ...(change as object) } as State)));
   }, []);
 
   return { state, setState, update };
