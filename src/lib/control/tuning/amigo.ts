@@ -19,6 +19,7 @@ export const amigo: TuningRule = {
     { model: 'ipdt', controller: 'pi', form: 'ideal' },
     { model: 'ipdt', controller: 'pid', form: 'ideal' },
   ],
+  options: [],
   range: {
     thetaOverTau: null,
     note: 'Fitted for Ms about 1.4 over a test batch spanning all normalized dead times θ/(θ+τ); the PID rule is conservative for lag-dominant loops (from memory of the book).',

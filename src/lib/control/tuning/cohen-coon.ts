@@ -15,6 +15,7 @@ export const cohenCoon: TuningRule = {
     { model: 'fopdt', controller: 'pi', form: 'ideal' },
     { model: 'fopdt', controller: 'pid', form: 'ideal' },
   ],
+  options: [],
   range: {
     thetaOverTau: { min: 0.1, max: 1 },
     note: 'Aims at quarter-amplitude decay like Ziegler–Nichols, so loops are aggressive; usual range 0.1 ≤ θ/τ ≤ 1 (common practice).',

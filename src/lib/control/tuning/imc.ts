@@ -15,6 +15,7 @@ export const imc: TuningRule = {
     { model: 'fopdt', controller: 'pi', form: 'ideal' },
     { model: 'fopdt', controller: 'pid', form: 'ideal' },
   ],
+  options: ['lambda'],
   range: {
     thetaOverTau: null,
     note: 'Any θ/τ; the paper recommends λ > 1.7θ for PI and λ > 0.8θ for PID (from memory of its Table 1).',

@@ -11,6 +11,7 @@ export const lambda: TuningRule = {
   name: 'Lambda',
   source: 'Chien, I.-L. & Fruehauf, P. S. (1990). Consider IMC tuning to improve controller performance. Chem. Eng. Progress 86(10), 33–41.',
   cases: [{ model: 'fopdt', controller: 'pi', form: 'ideal' }],
+  options: ['lambda'],
   range: {
     thetaOverTau: { min: null, max: 1 },
     note: 'Lag-dominant loops (θ/τ up to about 1, common practice); choose λ ≥ θ for robustness, λ = τ (the default) for a response as fast as open loop.',

@@ -25,6 +25,8 @@ export interface TuningRule {
   /** The publication the formulas come from. */
   source: string;
   cases: RuleCase[];
+  /** The options the rule reads (tauC, lambda); any other option is refused. */
+  options: readonly (keyof TuneOptions)[];
   range: RuleRange;
   /** kc, ti, td (s) for a model and controller already known to be one of `cases`. */
   design(model: TuningModel, controller: ControllerKind, options: TuneOptions): Omit<TunedController, 'form'>;

@@ -72,6 +72,12 @@ export function designController(
 ): TuneResult {
   const rule = ruleById(ruleId);
   const { form } = ruleCase(rule, model.type, controller);
+  for (const key of Object.keys(options) as (keyof TuneOptions)[]) {
+    if (options[key] !== undefined && !rule.options.includes(key)) {
+      const takes = rule.options.length > 0 ? `it takes ${rule.options.join(', ')}` : 'it takes no options';
+      throw new ModelError(`${rule.name} does not use options.${key}; ${takes}.`, 'invalid_request', `options.${key}`);
+    }
+  }
   const settings = rule.design(model, controller, options);
   for (const [key, value] of Object.entries(settings)) {
     if (!Number.isFinite(value)) {

@@ -31,6 +31,7 @@ export const simc: TuningRule = {
     { model: 'sopdt', controller: 'pid', form: 'series' },
     { model: 'ipdt', controller: 'pi', form: 'ideal' },
   ],
+  options: ['tauC'],
   range: {
     thetaOverTau: null,
     note: 'Any θ/τ; τc = θ gives tight control (Ms about 1.6–1.7 per the paper), a larger τc smoother and more robust control.',

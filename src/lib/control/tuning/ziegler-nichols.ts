@@ -17,6 +17,7 @@ export const zieglerNicholsOpenLoop: TuningRule = {
     { model: 'fopdt', controller: 'pi', form: 'ideal' },
     { model: 'fopdt', controller: 'pid', form: 'ideal' },
   ],
+  options: [],
   range: {
     thetaOverTau: { min: 0.1, max: 1 },
     note: 'Aims at quarter-amplitude decay, so expect oscillatory loops (Ms often above 2); usual range 0.1 ≤ θ/τ ≤ 1 (common practice).',
@@ -43,6 +44,7 @@ export const zieglerNicholsUltimate: TuningRule = {
     { model: 'ultimate', controller: 'pi', form: 'ideal' },
     { model: 'ultimate', controller: 'pid', form: 'ideal' },
   ],
+  options: [],
   range: {
     thetaOverTau: null,
     note: 'Needs the ultimate point of the running loop (relay or gain test); aims at quarter-amplitude decay, so expect oscillatory loops.',

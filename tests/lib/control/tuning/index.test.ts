@@ -58,6 +58,8 @@ describe('tune', () => {
     { why: 'tau2 above tau1', request: { model: { ...models.sopdt, tau2: 20 }, rule: 'simc', controller: 'pid' }, field: 'model.tau1' },
     { why: 'a non-finite option', request: { model: models.fopdt, rule: 'imc', controller: 'pi', options: { lambda: Number.NaN } }, field: 'options.lambda' },
     { why: 'an unknown option', request: { model: models.fopdt, rule: 'imc', controller: 'pi', options: { speed: 2 } }, field: 'options' },
+    { why: 'an option the rule does not read', request: { model: models.fopdt, rule: 'lambda', controller: 'pi', options: { tauC: 4 } }, field: 'options.tauC' },
+    { why: 'any option for Ziegler–Nichols', request: { model: models.fopdt, rule: 'zn-open-loop', controller: 'pi', options: { lambda: 4 } }, field: 'options.lambda' },
     { why: 'a missing model', request: { rule: 'imc', controller: 'pi' }, field: 'model' },
   ];
 
