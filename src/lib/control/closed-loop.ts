@@ -3,14 +3,16 @@
  * times of G and H taken exactly. Without dead time in the loop the closed loop is rational and
  * simulated exactly. With dead time θ = θG + θH the loop is cut at the delay: the rational part
  * (C·G_R, then H_R) is advanced exactly over each fixed step for an error signal that is linear
- * within the step (first-order hold), and the delayed measurement is read from the stored history
- * by linear interpolation; when θ is shorter than a step the one unknown sample is solved for.
+ * within the step (first-order hold); the step divides θ so the delayed measurement is a stored
+ * sample; when θ is shorter than a step the one unknown sample is solved for. The output, delayed
+ * by θG, is read between stored samples by cubic Hermite interpolation (dz/dt is known exactly).
  * The dead time is never replaced by a rational approximation.
  */
 import { ModelError, type TransferFunction } from './types';
 import { add, degree, multiply } from './polynomial';
 import { cascade, discretizeStates as discretize, toStateSpace } from './state-space';
-import { stepResponse, type TimeResponse } from './simulate';
+import { impulseResponse, stepResponse, type TimeResponse } from './simulate';
+import { roots } from './roots';
 import { gridStep } from './time-grid';
 
 /** The loop's blocks: controller C (may be improper), plant G and sensor H with their dead times. */
@@ -22,10 +24,29 @@ export interface Loop {
 
 export type LoopInput = 'setpoint' | 'load';
 
-/** Options for the fixed-step simulation; steps are at most tFinal/minSteps long. */
+/**
+ * Options for the fixed-step simulation. The step is at most tFinal/minSteps and at most half
+ * the fastest time constant of the loop's blocks (but no more than maxSteps steps in all), and
+ * it divides the loop dead time exactly so that delayed samples fall on stored ones.
+ */
 export interface ClosedLoopOptions {
   /** Least number of internal steps over the horizon; default 1000. */
   minSteps?: number;
+  /** Most internal steps over the horizon; default 200 000. */
+  maxSteps?: number;
+}
+
+/** Internal step: see ClosedLoopOptions. */
+function internalStep(span: number, theta: number, fastest: number, options: ClosedLoopOptions): number {
+  let h = span / (options.minSteps ?? 1000);
+  if (fastest > 0) h = Math.min(h, 0.5 / fastest);
+  h = Math.max(h, span / (options.maxSteps ?? 200000));
+  if (theta >= h) h = theta / Math.ceil(theta / h - 1e-9);
+  return h;
+}
+
+function fastestRate(g: TransferFunction): number {
+  return Math.max(0, ...roots(g.den).map((r) => Math.hypot(r.re, r.im)));
 }
 
 /** Rational closed loop Y/R or Y/D of a loop without dead time. */
@@ -44,11 +65,8 @@ export function closedLoopTransferFunction(loop: Loop, input: LoopInput): Transf
 export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInput = 'setpoint', options: ClosedLoopOptions = {}): TimeResponse {
   const theta = loop.plant.delay + loop.sensor.delay;
   if (theta === 0) return stepResponse(closedLoopTransferFunction(loop, input), t);
-  const dt = gridStep(t);
+  gridStep(t);
   const span = t[t.length - 1] - t[0];
-  const sub = Math.max(1, Math.ceil(((options.minSteps ?? 1000) * dt) / span - 1e-9));
-  const h = dt / sub;
-  const steps = (t.length - 1) * sub;
   const rational = (g: TransferFunction): TransferFunction => ({ num: g.num, den: g.den, delay: 0 });
   const gR = rational(loop.plant);
   const hR = rational(loop.sensor);
@@ -56,6 +74,8 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
   if (degree(p.num) > degree(p.den)) {
     throw new ModelError('With dead time in the loop, controller times plant must be proper; add a derivative filter.', 'invalid_model', 'controller');
   }
+  const h = internalStep(span, theta, Math.max(fastestRate(p), fastestRate(hR)), options);
+  const steps = Math.ceil(span / h - 1e-9);
   const ss = cascade(toStateSpace(p), toStateSpace(hR));
   const { phi, g0, g1 } = discretize(ss, h);
   const n = ss.n;
@@ -64,9 +84,18 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
   // Known forcing by the load step: z2 = G_R·d and m2 = H_R·G_R·d, exact on the internal grid.
   const inner = Array.from({ length: steps + 1 }, (_, i) => i * h);
   const z2 = input === 'load' ? stepResponse(gR, inner).y : null;
+  const z2Rate = input === 'load' ? impulseResponse(gR, inner).y : null;
   const m2 = input === 'load' ? stepResponse({ num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 }, inner).y : null;
   const r = input === 'setpoint' ? 1 : 0;
   const zHist = new Float64Array(steps + 1);
+  // dz/dt at each node, for cubic Hermite interpolation of the output between nodes.
+  const zRate = new Float64Array(steps + 1);
+  const czA = new Float64Array(n);
+  let czB = 0;
+  for (let k = 0; k < n; k++) {
+    czB += cz[k] * ss.b[k];
+    for (let j = 0; j < n; j++) czA[j] += cz[k] * ss.a[k * n + j];
+  }
   const mHist = new Float64Array(steps + 1);
   let x: Float64Array = new Float64Array(n);
   let xn: Float64Array = new Float64Array(n);
@@ -88,7 +117,10 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
       zi += cz[k] * x[k];
       mi += cm[k] * x[k];
     }
+    let zr = czB * e + (z2Rate ? z2Rate[i] : 0);
+    for (let k = 0; k < n; k++) zr += czA[k] * x[k];
     zHist[i] = zi;
+    zRate[i] = zr;
     mHist[i] = mi;
     if (i === steps) break;
     for (let a = 0; a < n; a++) {
@@ -120,7 +152,9 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
     const f = Math.max(0, tau / h);
     const j = Math.floor(f);
     if (j >= steps) return zHist[steps];
-    return zHist[j] + (f - j) * (zHist[j + 1] - zHist[j]);
+    const u = f - j;
+    const u2 = u * u, u3 = u2 * u;
+    return (2 * u3 - 3 * u2 + 1) * zHist[j] + (u3 - 2 * u2 + u) * h * zRate[j] + (3 * u2 - 2 * u3) * zHist[j + 1] + (u3 - u2) * h * zRate[j + 1];
   });
   return { t: [...t], y };
 }
