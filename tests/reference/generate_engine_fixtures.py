@@ -12,7 +12,8 @@ Writes tests/reference/fixtures/*.json. Methods:
   numpy.roots of numerator and denominator minus w*delay (the contract's continuous phase).
 - poles and zeros: numpy.roots.
 - margins: scipy.optimize.brentq on log|L(jw)| = 0 and on phase(w) + 180 = 0 after a dense scan;
-  Ms and Mt by scipy.optimize.minimize_scalar (bounded) around the densest-grid maximum.
+  Ms and Mt by scipy.optimize.minimize_scalar (bounded) around the dense-grid maximum, and their
+  limits as w -> 0 (a supremum can sit there: T -> 1 with integral action).
 - closed loops with dead time inside the loop: a method-of-steps DDE integration: scipy's
   solve_ivp (RK45, rtol 1e-10) over successive intervals one loop delay long, the delayed
   measurement taken from the previous interval's dense output.
@@ -146,6 +147,16 @@ def pid_ideal(kc, ti, td, n):
     return tf([kc * ti * (a + td), kc * (ti + a), kc], [ti * a, ti, 0])
 
 
+def low_limit(blocks):
+    """|S| and |T| as w -> 0: with a pole at the origin S -> 0 and T -> 1, else from L(0)."""
+    num = np.prod([b["num"][-1] for b in blocks])
+    den = np.prod([b["den"][-1] for b in blocks])
+    if den == 0:
+        return 0.0, 1.0
+    l0 = num / den
+    return 1 / abs(1 + l0), abs(l0 / (1 + l0))
+
+
 def margins_cases():
     cases = [
         ("integrator with delay K=0.5, theta=1", [tf([0.5], [1, 0], 1.0)]),
@@ -193,7 +204,7 @@ def margins_cases():
             "phaseCrossover": wpc, "gainMargin": None if gm is None else float(gm),
             "delayMargin": None if pm is None else float(np.radians(pm) / wgc),
             "gainCrossovers": [float(x) for x in gcs], "firstPhaseCrossovers": [float(x) for x in pcs],
-            "ms": peak(S), "mt": peak(T),
+            "ms": max(peak(S), low_limit(blocks)[0]), "mt": max(peak(T), low_limit(blocks)[1]),
         })
     write("margins.json", {"cases": out})
 

@@ -1,8 +1,11 @@
 /**
- * Frequency response of a product of rational blocks with dead time, evaluated from the roots
- * of each block (factored form, so high orders stay well conditioned). Phase is the contract's
+ * Frequency response of a product of rational blocks with dead time. Phase is the contract's
  * continuous phase: Σ arg(jw − z) − Σ arg(jw − p) (each in (−180°, 180°]), + 180° for a negative
  * leading gain, − w·delay; it does not depend on the sampling of w. w in rad/s, phase in degrees.
+ * Each block is evaluated on its own (never an expanded product of blocks) by Horner's rule —
+ * backward stable for the coefficients as given, in 1/(jw) above w = 1 so high orders cannot
+ * overflow — and the root angles pick the 360° branch of the phase, so roots of repeated poles,
+ * which are only accurate to eps^(1/m), cannot spoil magnitude or phase.
  */
 import type { Complex, TransferFunction } from './types';
 import { roots } from './roots';
@@ -15,6 +18,8 @@ export interface FactoredModel {
   zeros: Complex[];
   poles: Complex[];
   delay: number;
+  /** The blocks' polynomials, evaluated one block at a time. */
+  blocks: { num: number[]; den: number[] }[];
   /** Flat copies for the inner loops. */
   zr: Float64Array;
   zi: Float64Array;
@@ -34,12 +39,12 @@ export function factor(blocks: readonly TransferFunction[]): FactoredModel {
     zeros.push(...roots(b.num));
     poles.push(...roots(b.den));
   }
-  return fromFactors(gain, zeros, poles, delay);
+  return fromFactors(gain, zeros, poles, delay, blocks.map((b) => ({ num: b.num, den: b.den })));
 }
 
-export function fromFactors(gain: number, zeros: Complex[], poles: Complex[], delay: number): FactoredModel {
+export function fromFactors(gain: number, zeros: Complex[], poles: Complex[], delay: number, blocks: { num: number[]; den: number[] }[] = []): FactoredModel {
   return {
-    gain, zeros, poles, delay,
+    gain, zeros, poles, delay, blocks,
     zr: Float64Array.from(zeros, (z) => z.re),
     zi: Float64Array.from(zeros, (z) => z.im),
     pr: Float64Array.from(poles, (p) => p.re),
@@ -47,8 +52,55 @@ export function fromFactors(gain: number, zeros: Complex[], poles: Complex[], de
   };
 }
 
+/**
+ * p(jw) as magnitude and angle (rad, principal). Above w = 1 the reversed polynomial is evaluated
+ * at 1/(jw) and the power w^n kept apart, so the caller can combine blocks without overflow.
+ */
+function polyAtJw(p: readonly number[], w: number): { logScale: number; mag: number; arg: number } {
+  const n = p.length - 1;
+  let re = 0, im = 0;
+  if (w <= 1) {
+    for (let i = 0; i <= n; i++) {
+      const r = -im * w + p[i];
+      im = re * w;
+      re = r;
+    }
+    return { logScale: 0, mag: Math.hypot(re, im), arg: Math.atan2(im, re) };
+  }
+  // q(y) = Σ p[i]·y^i with y = 1/(jw) = −j/w, so p(jw) = (jw)^n·q(y).
+  const y = -1 / w;
+  for (let i = n; i >= 0; i--) {
+    const r = -im * y + p[i];
+    im = re * y;
+    re = r;
+  }
+  return { logScale: n * Math.log(w), mag: Math.hypot(re, im), arg: Math.atan2(im, re) + (n * Math.PI) / 2 };
+}
+
+/** |G(jw)| and the Horner phase (rad) modulo 2π, block by block. */
+function hornerAt(m: FactoredModel, w: number): { mag: number; arg: number } {
+  let logScale = 0, mag = Math.abs(m.gain) === 0 ? 0 : 1, arg = 0;
+  for (const b of m.blocks) {
+    const n = polyAtJw(b.num, w);
+    const d = polyAtJw(b.den, w);
+    logScale += n.logScale - d.logScale;
+    mag *= n.mag / d.mag;
+    arg += n.arg - d.arg;
+  }
+  return { mag: mag * Math.exp(logScale), arg };
+}
+
+/** Root-angle phase in rad (the contract's definition, before the dead time). */
+function rootPhase(m: FactoredModel, w: number): number {
+  let ph = m.gain < 0 ? Math.PI : 0;
+  for (let i = 0; i < m.zr.length; i++) ph += Math.atan2(w - m.zi[i], -m.zr[i]);
+  for (let i = 0; i < m.pr.length; i++) ph -= Math.atan2(w - m.pi[i], -m.pr[i]);
+  return ph;
+}
+
 /** |G(jw)|. */
 export function magnitudeAt(m: FactoredModel, w: number): number {
+  if (m.blocks.length) return hornerAt(m, w).mag;
   let m2 = m.gain * m.gain;
   const nz = m.zr.length, np = m.pr.length;
   const n = Math.max(nz, np);
@@ -61,16 +113,23 @@ export function magnitudeAt(m: FactoredModel, w: number): number {
 
 /** Continuous phase in degrees (see the module comment). */
 export function phaseAt(m: FactoredModel, w: number): number {
-  let ph = m.gain < 0 ? Math.PI : 0;
-  for (let i = 0; i < m.zr.length; i++) ph += Math.atan2(w - m.zi[i], -m.zr[i]);
-  for (let i = 0; i < m.pr.length; i++) ph -= Math.atan2(w - m.pi[i], -m.pr[i]);
-  return (ph - w * m.delay) * DEG;
+  return pointAt(m, w).phaseDeg;
+}
+
+/** Magnitude and continuous phase together (one evaluation). */
+export function pointAt(m: FactoredModel, w: number): { mag: number; phaseDeg: number } {
+  const branch = rootPhase(m, w);
+  if (!m.blocks.length) return { mag: magnitudeAt(m, w), phaseDeg: (branch - w * m.delay) * DEG };
+  const h = hornerAt(m, w);
+  const turns = Math.round((branch - h.arg) / (2 * Math.PI));
+  return { mag: h.mag, phaseDeg: (h.arg + 2 * Math.PI * turns - w * m.delay) * DEG };
 }
 
 /** G(jw) as a complex number. */
 export function valueAt(m: FactoredModel, w: number): Complex {
-  const mag = magnitudeAt(m, w);
-  const ph = phaseAt(m, w) / DEG;
+  const p = pointAt(m, w);
+  const mag = p.mag;
+  const ph = p.phaseDeg / DEG;
   return { re: mag * Math.cos(ph), im: mag * Math.sin(ph) };
 }
 
@@ -82,7 +141,14 @@ export interface FrequencyResponse {
 }
 
 export function frequencyResponse(m: FactoredModel, w: readonly number[]): FrequencyResponse {
-  return { w: [...w], mag: w.map((x) => magnitudeAt(m, x)), phaseDeg: w.map((x) => phaseAt(m, x)) };
+  const mag = new Array<number>(w.length);
+  const phaseDeg = new Array<number>(w.length);
+  for (let i = 0; i < w.length; i++) {
+    const p = pointAt(m, w[i]);
+    mag[i] = p.mag;
+    phaseDeg[i] = p.phaseDeg;
+  }
+  return { w: [...w], mag, phaseDeg };
 }
 
 /** Bode data: magnitude also in dB. */

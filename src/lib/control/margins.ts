@@ -105,6 +105,13 @@ function peakSensitivities(m: FactoredModel, w: number[]): { ms: number; mt: num
   };
   ms = refine(is, 's', ms);
   mt = refine(it, 't', mt);
+  // The supremum may sit at w = 0 (e.g. an open-loop unstable plant): include L(0) when finite.
+  const l0 = lowFrequencyGain(m);
+  if (!Number.isFinite(l0)) mt = Math.max(mt, 1);
+  else if (l0 !== -1) {
+    ms = Math.max(ms, 1 / Math.abs(1 + l0));
+    mt = Math.max(mt, Math.abs(l0 / (1 + l0)));
+  }
   // Strictly proper loops: S → 1 as w → ∞, so the supremum is at least 1.
   if (m.pr.length > m.zr.length) ms = Math.max(ms, 1);
   return { ms, mt };

@@ -202,34 +202,41 @@ function mergeClusters(c: number[], list: Complex[]): Complex[] {
   for (let i = 0; i < out.length; i++) {
     if (taken[i]) continue;
     const scale = Math.hypot(out[i].re, out[i].im);
-    const group = [i];
-    for (let j = i + 1; j < out.length; j++) {
-      if (!taken[j] && Math.hypot(out[j].re - out[i].re, out[j].im - out[i].im) <= 1e-2 * scale) group.push(j);
-    }
-    if (group.length < 2) continue;
-    const m = group.length;
-    let z = {
-      re: group.reduce((s, k) => s + out[k].re, 0) / m,
-      im: group.reduce((s, k) => s + out[k].im, 0) / m,
-    };
-    const d = derivative(c, m - 1);
-    const dd = derivative(d, 1);
-    for (let it = 0; it < 30; it++) {
-      const f = horner(d, z), g = horner(dd, z);
-      const den = g.re * g.re + g.im * g.im;
-      if (den === 0) break;
-      const step = { re: (f.re * g.re + f.im * g.im) / den, im: (f.im * g.re - f.re * g.im) / den };
-      z = { re: z.re - step.re, im: z.im - step.im };
-      if (Math.hypot(step.re, step.im) <= EPS * Math.hypot(z.re, z.im)) break;
-    }
-    if (isMultipleRoot(c, z, m)) {
+    const nearIdx = out.map((_, j) => j).filter((j) => !taken[j] && Math.hypot(out[j].re - out[i].re, out[j].im - out[i].im) <= 0.05 * scale);
+    const cx = nearIdx.reduce((s, j) => s + out[j].re, 0) / nearIdx.length;
+    const cy = nearIdx.reduce((s, j) => s + out[j].im, 0) / nearIdx.length;
+    const near = nearIdx.map((j) => ({ j, d: Math.hypot(out[j].re - cx, out[j].im - cy) })).sort((a, b) => a.d - b.d);
+    for (let m = near.length; m >= 2; m--) {
+      const group = near.slice(0, m).map((x) => x.j);
+      const z = polishMultiple(c, group.map((k) => out[k]), m);
+      if (!isMultipleRoot(c, z, m)) continue;
       for (const k of group) {
         out[k] = { ...z };
         taken[k] = true;
       }
+      break;
     }
   }
   return out;
+}
+
+/** Newton's method on p^(m−1), where a root of multiplicity m is simple, from the group's mean. */
+function polishMultiple(c: number[], group: Complex[], m: number): Complex {
+  let z = {
+    re: group.reduce((s, r) => s + r.re, 0) / m,
+    im: group.reduce((s, r) => s + r.im, 0) / m,
+  };
+  const d = derivative(c, m - 1);
+  const dd = derivative(d, 1);
+  for (let it = 0; it < 30; it++) {
+    const f = horner(d, z), g = horner(dd, z);
+    const den = g.re * g.re + g.im * g.im;
+    if (den === 0) break;
+    const step = { re: (f.re * g.re + f.im * g.im) / den, im: (f.im * g.re - f.re * g.im) / den };
+    z = { re: z.re - step.re, im: z.im - step.im };
+    if (Math.hypot(step.re, step.im) <= EPS * Math.hypot(z.re, z.im)) break;
+  }
+  return z;
 }
 
 /** k-th derivative of a real polynomial. */
