@@ -64,7 +64,10 @@ function infNorm(a: Float64Array, n: number): number {
   return best;
 }
 
-/** e^A for an n×n matrix A. */
+/**
+ * e^A for an n×n matrix A. The squaring phase works on X = e^(A/2^s) − I (X ← 2X + X²), which
+ * keeps slow modes of stiff models accurate where squaring e^(A/2^s) itself would lose digits.
+ */
 export function expm(a: Float64Array, n: number): Float64Array {
   const norm = infNorm(a, n);
   const s = norm > 0.5 ? Math.max(0, Math.ceil(Math.log2(norm / 0.5))) : 0;
@@ -73,10 +76,11 @@ export function expm(a: Float64Array, n: number): Float64Array {
   const q = 6;
   let c = 0.5;
   let power: Float64Array = Float64Array.from(x);
-  const num = identity(n);
   const den = identity(n);
+  // N − D = 2·Σ odd terms; D = Σ (−1)^k c_k X^k.
+  const diff = new Float64Array(n * n);
   for (let i = 0; i < n * n; i++) {
-    num[i] += c * x[i];
+    diff[i] = 2 * c * x[i];
     den[i] -= c * x[i];
   }
   let sign = -1;
@@ -85,11 +89,16 @@ export function expm(a: Float64Array, n: number): Float64Array {
     power = matMul(power, x, n);
     sign = -sign;
     for (let i = 0; i < n * n; i++) {
-      num[i] += c * power[i];
       den[i] += sign * c * power[i];
+      if (k % 2 === 1) diff[i] += 2 * c * power[i];
     }
   }
-  let e: Float64Array = solve(den, num, n);
-  for (let k = 0; k < s; k++) e = matMul(e, e, n);
+  let e: Float64Array = solve(den, diff, n);
+  for (let k = 0; k < s; k++) {
+    const sq = matMul(e, e, n);
+    for (let i = 0; i < n * n; i++) e[i] = 2 * e[i] + sq[i];
+  }
+  e = Float64Array.from(e);
+  for (let i = 0; i < n; i++) e[i * n + i] += 1;
   return e;
 }
