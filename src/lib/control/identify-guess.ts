@@ -6,15 +6,15 @@
  */
 import type { StepTest } from './identify-step';
 
-/** Moving average over an odd window; keeps noise from setting the crossing times. */
+/** Moving average over an odd window (prefix sums); keeps noise from setting the crossing times. */
 function smooth(y: number[], window: number): number[] {
   const half = Math.floor(window / 2);
+  const prefix = [0];
+  for (const v of y) prefix.push(prefix[prefix.length - 1] + v);
   return y.map((_, i) => {
     const lo = Math.max(0, i - half);
     const hi = Math.min(y.length - 1, i + half);
-    let sum = 0;
-    for (let j = lo; j <= hi; j++) sum += y[j];
-    return sum / (hi - lo + 1);
+    return (prefix[hi + 1] - prefix[lo]) / (hi - lo + 1);
   });
 }
 

@@ -72,7 +72,7 @@ export function readStepTest(input: unknown): { test: StepTest; model: IdentifyR
   }
   const step = u
     ? locateStep(t, u)
-    : { stepTime: 0, stepSize: 1, stepIndex: Math.max(0, t.findIndex((v) => v >= 0)) };
+    : { stepTime: 0, stepSize: 1, stepIndex: t.findIndex((v) => v >= 0) };
   if (step.stepIndex < 0 || t.length - step.stepIndex < 5) {
     throw new ModelError('Fewer than 5 samples follow the step; record the response for longer.', 'invalid_request', 't');
   }

@@ -41,14 +41,19 @@ interface Scaled {
   y0: number;
 }
 
+/** Samples the optimizer sees at most; longer records are thinned evenly (quality uses all). */
+const FIT_SAMPLES = 1500;
+
 function scale(test: StepTest): Scaled {
   const span = test.t[test.t.length - 1] - test.stepTime;
   const y0 = baseline(test);
   const mean = test.y.reduce((a, b) => a + b, 0) / test.y.length;
   const spread = Math.sqrt(test.y.reduce((a, v) => a + (v - mean) ** 2, 0) / test.y.length) || 1;
+  const stride = Math.ceil(test.t.length / FIT_SAMPLES);
+  const keep = test.t.map((_, i) => i).filter((i) => i % stride === 0);
   return {
-    x: test.t.map((t) => (t - test.stepTime) / span),
-    y: test.y.map((v) => (v - y0) / spread),
+    x: keep.map((i) => (test.t[i] - test.stepTime) / span),
+    y: keep.map((i) => (test.y[i] - y0) / spread),
     span,
     spread,
     y0,
@@ -63,15 +68,15 @@ function sumSquares(data: Scaled, f: (x: number) => number): number {
 
 /**
  * LM from a candidate, parameters [gain, ...times, offset], in rounds of 25 iterations until a
- * round improves the sum of squares by less than 1e-9 (relative): the optimizer itself only
- * stops at an absolute error, which noisy data never reach.
+ * round improves the sum of squares by less than 1e-9 (relative) or `rounds` are done: the
+ * optimizer itself only stops at an absolute error, which noisy data never reach.
  */
-function fitFrom(data: Scaled, c: Candidate): { params: number[]; sse: number } {
+function fitFrom(data: Scaled, c: Candidate, start: number[], rounds: number): { params: number[]; sse: number } {
   const model = (p: number[]) => {
     const times = p.slice(1, -1);
     return (x: number) => p[0] * c.shape.value(x, times) + p[p.length - 1];
   };
-  // Parameters [gain, ...times, offset]: ∂/∂gain = shape, ∂/∂times = gain·∂shape, ∂/∂offset = 1.
+  // ∂/∂gain = shape, ∂/∂times = gain·∂shape, ∂/∂offset = 1.
   const jacobian = (p: number[]) => {
     const times = p.slice(1, -1);
     return (x: number) => [c.shape.value(x, times), ...c.shape.gradient(x, times).map((g) => p[0] * g), 1];
@@ -81,9 +86,9 @@ function fitFrom(data: Scaled, c: Candidate): { params: number[]; sse: number } 
     minValues: [-1e9, ...new Array<number>(n - 1).fill(1e-6), 0, -1e3],
     maxValues: [1e9, ...new Array<number>(n - 1).fill(1e3), 0.95, 1e3],
   };
-  let params = [c.gain, ...c.times, 0];
+  let params = start;
   let sse = sumSquares(data, model(params));
-  for (let round = 0; round < 12; round++) {
+  for (let round = 0; round < rounds; round++) {
     const result = levenbergMarquardt({ x: data.x, y: data.y }, model, {
       ...bounds,
       initialValues: params,
@@ -102,14 +107,15 @@ function fitFrom(data: Scaled, c: Candidate): { params: number[]; sse: number } 
   return { params, sse };
 }
 
+/** Screens every start with one round, then polishes the best one. */
 function best(data: Scaled, candidates: Candidate[]): number[] {
-  let winner: { params: number[]; sse: number } | null = null;
+  let winner: { params: number[]; sse: number; candidate: Candidate } | null = null;
   for (const c of candidates) {
-    const run = fitFrom(data, c);
-    if (Number.isFinite(run.sse) && (winner === null || run.sse < winner.sse)) winner = run;
+    const run = fitFrom(data, c, [c.gain, ...c.times, 0], 1);
+    if (Number.isFinite(run.sse) && (winner === null || run.sse < winner.sse)) winner = { ...run, candidate: c };
   }
   if (!winner) throw new ModelError('The step test could not be fitted; check that y responds to the step.', 'invalid_request', 'y');
-  return winner.params;
+  return fitFrom(data, winner.candidate, winner.params, 12).params;
 }
 
 const fopdtShape: Shape = {

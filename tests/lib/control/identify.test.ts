@@ -128,6 +128,7 @@ describe('identify', () => {
     { why: 'u without a step', request: { t, y, u: t.map(() => 50), model: 'fopdt' }, field: 'u' },
     { why: 'u with two steps', request: { t, y, u: t.map((v) => (v > 5 && v < 12 ? 60 : v >= 12 ? 55 : 50)), model: 'fopdt' }, field: 'u.6' },
     { why: 'a y that never changes', request: { t, y: t.map(() => 20), model: 'ipdt' }, field: 'y' },
+    { why: 'no samples after the assumed step at t = 0', request: { t: t.map((v) => v - 100), y, model: 'fopdt' }, field: 't' },
     { why: 'an unknown model', request: { t, y, model: 'fopdt2' }, field: 'model' },
   ];
   it.each(bad)('refuses $why with invalid_request naming the field', ({ request, field }) => {
