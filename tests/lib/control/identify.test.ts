@@ -109,6 +109,16 @@ describe('identify', () => {
     expect(model.theta).toBeCloseTo(2, 2);
   });
 
+  it('fits a long record (20 000 samples, thinned for the optimizer) as well as a short one', () => {
+    const truth: ProcessModel = { type: 'fopdt', k: 1.8, tau: 45, theta: 9 };
+    const data = stepTest(truth, { dt: 0.02, n: 20000, stepAt: 30, u0: 20, u1: 26, y0: 12, sigma: 0.01, seed: 9 });
+    const { model, fit } = identify({ ...data, model: 'fopdt' });
+    expect(Math.abs(model.k / truth.k - 1)).toBeLessThan(0.01);
+    expect(model.type === 'fopdt' && Math.abs(model.tau / 45 - 1)).toBeLessThan(0.02);
+    expect(Math.abs(model.theta - 9)).toBeLessThan(0.3);
+    expect(fit.rmse).toBeLessThan(0.012);
+  });
+
   it('answers the contract shape: model {type, k, tau, theta} and fit {rmse, r2}', () => {
     const data = stepTest(cases[0].truth, cases[0].gen);
     const result = identify({ ...data, model: 'fopdt' });

@@ -44,6 +44,18 @@ describe('compareRules', () => {
     expect(Math.abs(row.predicted.ms - 1.70)).toBeLessThan(0.02);
   });
 
+  const robustness = [0.05, 0.3, 1, 2].flatMap((ratio) => [
+    { ratio, rule: 'simc', controller: 'pi', low: 1.55, high: 1.7, source: 'Skogestad 2003: τc = θ gives Ms 1.59–1.70 (from memory)' },
+    { ratio, rule: 'amigo', controller: 'pi', low: 1.2, high: 1.5, source: 'Åström & Hägglund 2006: AMIGO fitted for Ms = 1.4 (approximate rule)' },
+    { ratio, rule: 'amigo', controller: 'pid', low: 1.3, high: 1.5, source: 'Åström & Hägglund 2006: AMIGO fitted for Ms = 1.4 (approximate rule)' },
+  ] as const);
+
+  it.each(robustness)('predicts Ms in [$low, $high] for $rule $controller at θ/τ = $ratio ($source)', ({ ratio, rule, controller, low, high }) => {
+    const row = compareRules({ model: { type: 'fopdt', k: 1.3, tau: 10, theta: 10 * ratio }, controller }).rows.find((r) => r.rule === rule)!;
+    expect(row.predicted.ms).toBeGreaterThanOrEqual(low);
+    expect(row.predicted.ms).toBeLessThanOrEqual(high);
+  });
+
   it('takes the ultimate point from the model: Ku, Pu of K·e^(−θs)/(τs+1) in closed form', () => {
     const row = compareRules({ model: fopdt, controller: 'pid' }).rows.find((r) => r.rule === 'zn-ultimate')!;
     const exact = fopdtUltimate(fopdt.k, fopdt.tau, fopdt.theta);
