@@ -5,6 +5,7 @@
 import { databasePath } from './config';
 import { openDatabase } from './open';
 import { demoSeeded, seedDemo } from './seed';
+import { productionProblems } from '../auth/production';
 
 const MIGRATIONS = { directory: './migrations', extension: 'ts', loadExtensions: ['.ts'] };
 
@@ -25,7 +26,11 @@ async function main(command: string | undefined): Promise<void> {
         await seedDemo(knex);
         console.log('Demo data loaded.');
       }
-    } else if (command !== 'migrate' && command !== 'prepare') {
+    } else if (command === 'prepare') {
+      // Production refuses to start without its secrets or while a demo password still works.
+      const problems = await productionProblems(knex);
+      if (problems.length) throw new Error(`Loopwright refuses to start in production:\n- ${problems.join('\n- ')}`);
+    } else if (command !== 'migrate') {
       throw new Error(`Unknown command "${command ?? ''}": use migrate, seed or prepare.`);
     }
   } finally {

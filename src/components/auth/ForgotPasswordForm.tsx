@@ -1,0 +1,30 @@
+import { useState, type FormEvent } from 'react';
+import { sendJson } from './send-json';
+import { buttonClass, Field, FormMessage } from './Field';
+
+/** Asks for a reset link; the answer is the same whether or not the address has an account. */
+export default function ForgotPasswordForm() {
+  const [email, setEmail] = useState('');
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const [done, setDone] = useState<string | null>(null);
+
+  async function submit(event: FormEvent) {
+    event.preventDefault();
+    setBusy(true);
+    setError(null);
+    setDone(null);
+    const result = await sendJson('/api/auth/request-password-reset', { email: email.trim() });
+    setBusy(false);
+    if (result.ok) setDone(`If ${email.trim()} has a Loopwright account, a link to choose a new password is on its way. It works for one hour.`);
+    else setError(result.status === 429 ? 'Too many requests from this computer. Wait a few minutes, then try again.' : result.message);
+  }
+
+  return (
+    <form onSubmit={submit} className="space-y-4" aria-busy={busy}>
+      <Field label="Work e-mail" type="email" name="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} />
+      <FormMessage error={error} done={done} />
+      <button type="submit" className={buttonClass} disabled={busy}>{busy ? 'Sending…' : 'Send me a link'}</button>
+    </form>
+  );
+}
