@@ -3,12 +3,13 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { startServer, type RunningServer } from '../support/server';
+import { signInAs } from '../support/session';
 import pkg from '../../package.json';
 
 describe('GET /api/health', () => {
   let server: RunningServer;
   beforeAll(async () => {
-    server = await startServer();
+    server = await startServer({ seed: true });
   });
   afterAll(async () => server?.stop());
 
@@ -24,7 +25,8 @@ describe('GET /api/health', () => {
   });
 
   it('serves the home page with its three ways in', async () => {
-    const html = await (await fetch(`${server.url}/`)).text();
+    const cookie = await signInAs(server.url, 'reader');
+    const html = await (await fetch(`${server.url}/`, { headers: { Cookie: cookie } })).text();
     expect(html).toContain('New to the plant?');
     expect(html).toContain('Keeping the book honest?');
   });

@@ -1,28 +1,26 @@
 import type { APIRoute } from 'astro';
 import { CLIENT_IP_HEADER, getAuth } from '../../../lib/auth/auth';
+import { rateLimitAddress } from '../../../lib/auth/rate-limit-key';
 
 export const prerender = false;
 
 /**
  * better-auth's own routes (sign-in, sign-out, session, password reset, admin plugin). The
- * client address comes from the socket, never from a header the client could forge, and keys
- * the sign-in rate limit.
+ * address its rate limiter counts against is set here (src/lib/auth/rate-limit-key.ts); any
+ * such header a client sends is dropped.
  */
-export const ALL: APIRoute = async ({ request, clientAddress }) => {
+export const ALL: APIRoute = async ({ request, clientAddress, url }) => {
   const headers = new Headers(request.headers);
   headers.delete(CLIENT_IP_HEADER);
+  const hasBody = request.method !== 'GET' && request.method !== 'HEAD';
+  const body = hasBody ? await request.arrayBuffer() : undefined;
   let address = '';
   try {
     address = clientAddress;
   } catch {
-    // no socket address (e.g. a prerender); better-auth then uses one shared bucket
+    // no client address known; better-auth then counts in one shared bucket
   }
-  if (address) headers.set(CLIENT_IP_HEADER, address.replace(/^::ffff:/, ''));
-  const hasBody = request.method !== 'GET' && request.method !== 'HEAD';
-  const forwarded = new Request(request.url, {
-    method: request.method,
-    headers,
-    body: hasBody ? await request.arrayBuffer() : undefined,
-  });
-  return getAuth().handler(forwarded);
+  const counted = rateLimitAddress(url.pathname, body, address);
+  if (counted) headers.set(CLIENT_IP_HEADER, counted);
+  return getAuth().handler(new Request(request.url, { method: request.method, headers, body }));
 };
