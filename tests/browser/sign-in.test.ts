@@ -26,7 +26,8 @@ describe('signing in through the form in Chromium', () => {
     await form.getByLabel('Work e-mail').fill(email);
     await form.getByLabel('Password').fill('wrong-password-here');
     await form.getByRole('button', { name: 'Sign in' }).click();
-    await expect.poll(() => page.getByRole('alert').textContent()).toContain('do not match');
+    await page.getByRole('alert').waitFor({ timeout: 20_000 });
+    expect(await page.getByRole('alert').textContent()).toContain('do not match');
     expect(await form.getByLabel('Work e-mail').inputValue()).toBe(email);
 
     await form.getByLabel('Password').fill(password);
@@ -60,7 +61,9 @@ describe('signing in through the form in Chromium', () => {
     await form.getByLabel('Work e-mail').fill('rosa.underhill@brindlewood.example');
     await form.getByLabel('Role of the new person').selectOption('author');
     await form.getByRole('button', { name: 'Send invitation' }).click();
-    await expect.poll(() => form.getByRole('status').textContent()).toContain('Invitation sent');
+    const outcome = form.locator('[role="status"], [role="alert"]');
+    await outcome.waitFor({ timeout: 20_000 });
+    expect(await outcome.textContent()).toContain('Invitation sent');
     const row = page.locator('[data-testid="person-row"][data-email="rosa.underhill@brindlewood.example"]');
     expect(await row.getByTestId('person-status').textContent()).toContain('Invited');
     await page.screenshot({ path: artifactPath('admin-people.png'), fullPage: true });

@@ -1,3 +1,4 @@
+import { useEffect, useState } from 'react';
 import type { InputHTMLAttributes } from 'react';
 
 /** A labelled input in Loopwright's form style. */
@@ -20,3 +21,10 @@ export function FormMessage({ error, done }: { error?: string | null; done?: str
 
 export const buttonClass =
   'rounded-md bg-copper px-4 py-2 font-semibold text-panel disabled:cursor-wait disabled:opacity-60 hover:opacity-90';
+
+/** False during server rendering and until React has hydrated: submit buttons wait for it, so a click never falls through to a plain form post. */
+export function useHydrated(): boolean {
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
+  return ready;
+}

@@ -1,11 +1,12 @@
 import { useState, type FormEvent } from 'react';
 import { sendJson } from './send-json';
-import { buttonClass, Field, FormMessage } from './Field';
+import { buttonClass, Field, FormMessage, useHydrated } from './Field';
 
 /** Asks for a reset link; the answer is the same whether or not the address has an account. */
 export default function ForgotPasswordForm() {
   const [email, setEmail] = useState('');
   const [busy, setBusy] = useState(false);
+  const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
 
@@ -21,10 +22,10 @@ export default function ForgotPasswordForm() {
   }
 
   return (
-    <form onSubmit={submit} className="space-y-4" aria-busy={busy}>
+    <form method="post" onSubmit={submit} className="space-y-4" aria-busy={busy}>
       <Field label="Work e-mail" type="email" name="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} />
       <FormMessage error={error} done={done} />
-      <button type="submit" className={buttonClass} disabled={busy}>{busy ? 'Sending…' : 'Send me a link'}</button>
+      <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Sending…' : 'Send me a link'}</button>
     </form>
   );
 }

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import type { Person } from '../../lib/auth/people';
 import { ROLE_LABELS, ROLES, type Role } from '../../lib/auth/roles';
 import { sendJson } from './send-json';
-import { buttonClass, Field, FormMessage } from './Field';
+import { buttonClass, Field, FormMessage, useHydrated } from './Field';
 
 const STATUS_LABELS: Record<Person['status'], string> = { invited: 'Invited, no password yet', active: 'Active', deactivated: 'Deactivated' };
 
@@ -20,6 +20,7 @@ function InviteForm({ onInvited }: { onInvited(p: Person): void }) {
   const [name, setName] = useState('');
   const [role, setRole] = useState<Role>('reader');
   const [busy, setBusy] = useState(false);
+  const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
 
@@ -39,13 +40,13 @@ function InviteForm({ onInvited }: { onInvited(p: Person): void }) {
   }
 
   return (
-    <form onSubmit={submit} className="grid gap-3 rounded-lg border border-rule bg-panel p-4 md:grid-cols-[1fr_1fr_auto_auto] md:items-end" aria-busy={busy} data-testid="invite-form">
+    <form method="post" onSubmit={submit} className="grid gap-3 rounded-lg border border-rule bg-panel p-4 md:grid-cols-[1fr_1fr_auto_auto] md:items-end" aria-busy={busy} data-testid="invite-form">
       <Field label="Name" name="name" required value={name} onChange={(e) => setName(e.target.value)} />
       <Field label="Work e-mail" type="email" name="email" required value={email} onChange={(e) => setEmail(e.target.value)} />
       <label className="block text-sm font-semibold">Starts as
         <div className="mt-1"><RoleSelect label="Role of the new person" value={role} onChange={setRole} /></div>
       </label>
-      <button type="submit" className={buttonClass} disabled={busy}>{busy ? 'Sending…' : 'Send invitation'}</button>
+      <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Sending…' : 'Send invitation'}</button>
       <div className="md:col-span-4"><FormMessage error={error} done={done} /></div>
     </form>
   );
@@ -54,6 +55,7 @@ function InviteForm({ onInvited }: { onInvited(p: Person): void }) {
 function PersonRow({ person, isMe, onChanged }: { person: Person; isMe: boolean; onChanged(p: Person): void }) {
   const [role, setRole] = useState<Role>(person.role);
   const [busy, setBusy] = useState(false);
+  const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
 
   async function change(body: { role?: Role; active?: boolean }) {
@@ -72,14 +74,14 @@ function PersonRow({ person, isMe, onChanged }: { person: Person; isMe: boolean;
       <td className="py-2 pr-3">
         <div className="flex flex-wrap gap-2">
           <RoleSelect label={`Role of ${person.name}`} value={role} onChange={setRole} disabled={isMe || busy} />
-          {role !== person.role && <button type="button" className="text-sm font-semibold text-copper" disabled={busy} onClick={() => change({ role })}>Save role</button>}
+          {role !== person.role && <button type="button" className="text-sm font-semibold text-copper" disabled={busy || !ready} onClick={() => change({ role })}>Save role</button>}
         </div>
       </td>
       <td className="py-2 pr-3 text-sm" data-testid="person-status">{STATUS_LABELS[person.status]}</td>
       <td className="py-2 text-sm">
         {!isMe && (person.status === 'deactivated'
-          ? <button type="button" disabled={busy} className="font-semibold text-holds" onClick={() => change({ active: true })}>Reactivate</button>
-          : <button type="button" disabled={busy} className="font-semibold text-fails" onClick={() => change({ active: false })}>Deactivate</button>)}
+          ? <button type="button" disabled={busy || !ready} className="font-semibold text-holds" onClick={() => change({ active: true })}>Reactivate</button>
+          : <button type="button" disabled={busy || !ready} className="font-semibold text-fails" onClick={() => change({ active: false })}>Deactivate</button>)}
         {error && <p role="alert" className="mt-1 text-fails">{error}</p>}
       </td>
     </tr>

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { sendJson } from './send-json';
-import { buttonClass, Field, FormMessage } from './Field';
+import { buttonClass, Field, FormMessage, useHydrated } from './Field';
 
 interface Props {
   /** The one-time token from the e-mailed link. */
@@ -16,6 +16,7 @@ export default function SetPasswordForm({ token, minLength, email }: Props) {
   const [password, setPassword] = useState('');
   const [again, setAgain] = useState('');
   const [busy, setBusy] = useState(false);
+  const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
 
@@ -47,13 +48,13 @@ export default function SetPasswordForm({ token, minLength, email }: Props) {
     );
   }
   return (
-    <form onSubmit={submit} className="space-y-4" aria-busy={busy}>
+    <form method="post" onSubmit={submit} className="space-y-4" aria-busy={busy}>
       <Field label="New password" type="password" name="password" autoComplete="new-password" required minLength={minLength}
         hint={`At least ${minLength} characters; a short sentence is easy to remember and hard to guess.`}
         value={password} onChange={(e) => setPassword(e.target.value)} />
       <Field label="The same password again" type="password" name="again" autoComplete="new-password" required value={again} onChange={(e) => setAgain(e.target.value)} />
       <FormMessage error={error} />
-      <button type="submit" className={buttonClass} disabled={busy}>{busy ? 'Saving…' : 'Set my password'}</button>
+      <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Saving…' : 'Set my password'}</button>
     </form>
   );
 }

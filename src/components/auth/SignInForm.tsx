@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { sendJson } from './send-json';
-import { buttonClass, Field, FormMessage } from './Field';
+import { buttonClass, Field, FormMessage, useHydrated } from './Field';
 
 /** Messages for better-auth's answers, in our words. */
 function signInMessage(status: number, fallback: string): string {
@@ -15,6 +15,7 @@ export default function SignInForm({ next }: { next: string }) {
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const [busy, setBusy] = useState(false);
+  const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
 
   async function submit(event: FormEvent) {
@@ -31,12 +32,12 @@ export default function SignInForm({ next }: { next: string }) {
   }
 
   return (
-    <form onSubmit={submit} className="space-y-4" data-testid="sign-in-form" aria-busy={busy}>
+    <form method="post" onSubmit={submit} className="space-y-4" data-testid="sign-in-form" aria-busy={busy}>
       <Field label="Work e-mail" type="email" name="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} />
       <Field label="Password" type="password" name="password" autoComplete="current-password" required value={password} onChange={(e) => setPassword(e.target.value)} />
       <FormMessage error={error} />
       <div className="flex items-center gap-4">
-        <button type="submit" className={buttonClass} disabled={busy}>{busy ? 'Signing in…' : 'Sign in'}</button>
+        <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Signing in…' : 'Sign in'}</button>
         <a href="/forgot-password" className="text-sm">Forgot your password?</a>
       </div>
     </form>
