@@ -6,6 +6,7 @@
  */
 import { startServer } from '../support/server';
 import { launchChromium } from '../support/browser';
+import { demoAccount, signInPage } from '../support/session';
 
 /** The slider dragged: the controller gain of the demo page's HTST loop. */
 const SLIDER = 'htst-tic210-kc-slider';
@@ -17,10 +18,12 @@ function percentile(sorted: number[], p: number): number {
 }
 
 export async function run(): Promise<void> {
-  const server = await startServer();
+  const server = await startServer({ seed: true });
   const browser = await launchChromium();
   try {
     const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    const reader = demoAccount('reader');
+    await signInPage(page, server.url, reader.email, reader.password);
     await page.goto(`${server.url}/calculators`);
     const slider = page.getByTestId(SLIDER);
     await slider.waitFor();
