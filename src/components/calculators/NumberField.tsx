@@ -68,7 +68,7 @@ export default function NumberField({ label, value, kind, unit, min, onChange, t
             }
           }}
         />
-        {unit ? <span className="calc-unit">{unit}</span> : null}
+        <span className="calc-unit" aria-hidden={unit ? undefined : true}>{unit ?? ""}</span>
       </span>
       {error ? <span id={`${id}-error`} role="alert" className="calc-error">{error}</span> : null}
     </div>
