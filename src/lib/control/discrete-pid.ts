@@ -93,11 +93,11 @@ function lag(name: string, j: number): string {
 
 /** The discrete PID a PLC would run at sample time ts (s); validates its input with zod. */
 export function discretePid(controller: unknown, ts: number, options: DiscretePidOptions = {}): DiscretePid {
-  const c = parseRequest(PidControllerSchema, controller, () => 'invalid_request');
+  const c = parseRequest(z.object({ controller: PidControllerSchema }), { controller }).controller;
   if (!(Number.isFinite(ts) && ts > 0)) {
     throw new ModelError('The sample time ts must be a positive number of seconds.', 'invalid_request', 'ts');
   }
-  const { method, form } = parseRequest(DiscretePidOptionsSchema, options);
+  const { method, form } = parseRequest(z.object({ options: DiscretePidOptionsSchema }), { options }).options;
   const g = pidToTransferFunction(c, 'controller');
   const num = trim(g.num);
   const den = trim(g.den);

@@ -74,8 +74,8 @@ describe('discretePid', () => {
   it.each([
     { why: 'Tustin of an unfiltered derivative', args: [{ form: 'parallel', kp: 1, kd: 2 }, 0.1, { method: 'tustin' }], field: 'controller.tf' },
     { why: 'a zero sample time', args: [{ form: 'ideal', kc: 1, ti: 5 }, 0, {}], field: 'ts' },
-    { why: 'an unknown form', args: [{ form: 'pidf', kc: 1 }, 1, {}], field: 'form' },
-    { why: 'an unknown option', args: [{ form: 'ideal', kc: 1 }, 1, { antiWindup: true }], field: undefined },
+    { why: 'an unknown form', args: [{ form: 'pidf', kc: 1 }, 1, {}], field: 'controller.form' },
+    { why: 'an unknown option', args: [{ form: 'ideal', kc: 1 }, 1, { antiWindup: true }], field: 'options' },
   ])('refuses $why with invalid_request', ({ args, field }) => {
     const [c, ts, o] = args as [unknown, number, object];
     const error = modelErrorOf(() => discretePid(c, ts, o));

@@ -2,8 +2,6 @@ import { ModelError } from '../types';
 import type { TuningModel } from './schema';
 
 type FirstOrder = Extract<TuningModel, { type: 'fopdt' }>;
-type SecondOrder = Extract<TuningModel, { type: 'sopdt' }>;
-type Integrating = Extract<TuningModel, { type: 'ipdt' }>;
 type Ultimate = Extract<TuningModel, { type: 'ultimate' }>;
 
 /** Rules whose formulas divide by θ need a dead time; say so rather than answer Infinity. */
@@ -24,12 +22,6 @@ function wrongModel(expected: string): never {
 
 export function asFopdt(model: TuningModel): FirstOrder {
   return model.type === 'fopdt' ? model : wrongModel('fopdt');
-}
-export function asSopdt(model: TuningModel): SecondOrder {
-  return model.type === 'sopdt' ? model : wrongModel('sopdt');
-}
-export function asIpdt(model: TuningModel): Integrating {
-  return model.type === 'ipdt' ? model : wrongModel('ipdt');
 }
 export function asUltimate(model: TuningModel): Ultimate {
   return model.type === 'ultimate' ? model : wrongModel('ultimate');
