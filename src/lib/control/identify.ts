@@ -9,6 +9,7 @@
 import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { baseline, rampGuess, secondOrderGuesses, twoPointGuess } from './identify-guess';
 import { fopdtStep, fopdtStepGradient, ipdtStep, ipdtStepGradient, sopdtStep, sopdtStepGradient } from './identify-models';
+import { fitWarnings } from './identify-warnings';
 import { IdentifyRequestSchema, readStepTest, type IdentifyRequest, type StepTest } from './identify-step';
 import { ModelError, type ProcessModel } from './types';
 
@@ -18,6 +19,8 @@ export interface IdentifyResult {
   model: ProcessModel;
   /** rmse in y units; r2 = 1 − SSres/SStot of the fit over all samples. */
   fit: { rmse: number; r2: number };
+  /** Cautions in plain sentences (empty when none): short record, dead time at the edge, poor match. */
+  warnings: string[];
 }
 
 /** Unit step response of a model at scaled time x for scaled time parameters, and its gradient. */
@@ -198,5 +201,6 @@ export function identify(input: IdentifyRequest | unknown): IdentifyResult {
   // The offset is fitted in scaled units; recover it by the best level for the fitted shape.
   const shapeOnly = predict(model, test, 0);
   const level = test.y.reduce((a, v, i) => a + (v - shapeOnly[i]), 0) / test.y.length;
-  return { model, fit: quality(test.y, predict(model, test, level)) };
+  const fit = quality(test.y, predict(model, test, level));
+  return { model, fit, warnings: fitWarnings(model, test, fit.r2) };
 }

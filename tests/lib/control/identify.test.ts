@@ -119,11 +119,26 @@ describe('identify', () => {
     expect(fit.rmse).toBeLessThan(0.012);
   });
 
-  it('answers the contract shape: model {type, k, tau, theta} and fit {rmse, r2}', () => {
+  it('answers the contract shape: model {type, k, tau, theta} and fit {rmse, r2}, plus warnings', () => {
     const data = stepTest(cases[0].truth, cases[0].gen);
     const result = identify({ ...data, model: 'fopdt' });
     expect(Object.keys(result.model).sort()).toEqual(['k', 'tau', 'theta', 'type']);
     expect(Object.keys(result.fit).sort()).toEqual(['r2', 'rmse']);
+    expect(result.warnings).toEqual([]);
+  });
+
+  it('warns when the record stops before θ + 3τ (common practice: 95 % of a first-order step)', () => {
+    const truth: ProcessModel = { type: 'fopdt', k: 1, tau: 100, theta: 5 };
+    const data = stepTest(truth, { dt: 1, n: 120, stepAt: 10, u0: 0, u1: 1, y0: 0, sigma: 0, seed: 1 });
+    const { warnings } = identify({ ...data, model: 'fopdt' });
+    expect(warnings.some((w) => /record ends/.test(w))).toBe(true);
+  });
+
+  it('warns about a poor match when an integrating model is fitted to a self-regulating response', () => {
+    const data = stepTest(cases[3].truth, cases[3].gen);
+    const { warnings, fit } = identify({ t: data.t, y: data.y, model: 'ipdt' });
+    expect(fit.r2).toBeLessThan(0.9);
+    expect(warnings.some((w) => /matches the record poorly/.test(w))).toBe(true);
   });
 
   const t = Array.from({ length: 20 }, (_, i) => i);
