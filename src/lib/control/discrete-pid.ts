@@ -7,9 +7,10 @@
 import { z } from 'zod';
 import { PidControllerSchema } from '../schemas/controller';
 import { pidToTransferFunction } from './pid';
+import { toParallel } from './pid-forms';
 import { multiply, trim } from './polynomial';
 import { parseRequest } from './request-error';
-import { ModelError } from './types';
+import { ModelError, type PidController } from './types';
 
 export const DiscretePidOptionsSchema = z
   .object({
@@ -34,6 +35,41 @@ export interface DiscretePid {
   equation: string;
   /** C(z) in descending powers of z with den[0] = 1 (the positional b and a). */
   transferFunction: { num: number[]; den: number[] };
+  /** The same controller as separate P, I and D terms (for clamping the integral); null when it has no parallel form. */
+  terms: DiscretePidTerms | null;
+}
+
+/**
+ * P[k] = kp·e[k];  I[k] = I[k−1] + i0·e[k] + i1·e[k−1];  D[k] = ad·D[k−1] + bd·(e[k] − e[k−1]);
+ * u[k] = P[k] + I[k] + D[k]. Backward Euler: i0 = ki·ts, i1 = 0, ad = tf/(tf+ts), bd = kd/(tf+ts);
+ * Tustin: i0 = i1 = ki·ts/2, ad = (2tf−ts)/(2tf+ts), bd = 2kd/(2tf+ts).
+ */
+export interface DiscretePidTerms {
+  kp: number;
+  i0: number;
+  i1: number;
+  ad: number;
+  bd: number;
+  equation: string;
+}
+
+function separateTerms(c: PidController, ts: number, method: DiscretePid['method']): DiscretePidTerms | null {
+  const p = toParallel(c);
+  if (!p) return null;
+  const ki = p.ki ?? 0;
+  const kd = p.kd ?? 0;
+  const tf = p.tf ?? 0;
+  const tustin = method === 'tustin';
+  const i0 = tustin ? (ki * ts) / 2 : ki * ts;
+  const i1 = tustin ? i0 : 0;
+  const ad = tustin ? (2 * tf - ts) / (2 * tf + ts) : tf / (tf + ts);
+  const bd = tustin ? (2 * kd) / (2 * tf + ts) : kd / (tf + ts);
+  const parts = [`P[k] = ${sumText([{ coef: p.kp, name: 'e[k]' }])}`];
+  if (ki !== 0) parts.push(`I[k] = I[k−1] + ${sumText([{ coef: i0, name: 'e[k]' }, { coef: i1, name: 'e[k−1]' }])}`);
+  if (kd !== 0) parts.push(`D[k] = ${sumText([{ coef: ad, name: 'D[k−1]' }, { coef: bd, name: '(e[k] − e[k−1])' }])}`);
+  const sum = ['P[k]', ...(ki !== 0 ? ['I[k]'] : []), ...(kd !== 0 ? ['D[k]'] : [])].join(' + ');
+  parts.push(`u[k] = ${sum}`);
+  return { kp: p.kp, i0, i1, ad, bd, equation: parts.join('; ') };
 }
 
 /** p(s) with s replaced, times the common factor; result ascending in q = z⁻¹, length order+1. */
@@ -127,5 +163,5 @@ export function discretePid(controller: unknown, ts: number, options: DiscretePi
   ]);
   const equation =
     form === 'positional' ? `u[k] = ${rhs}` : `Δu[k] = ${rhs}; u[k] = u[k−1] + Δu[k]`;
-  return { ts, method, form, b, a, equation, transferFunction };
+  return { ts, method, form, b, a, equation, transferFunction, terms: separateTerms(c, ts, method) };
 }

@@ -60,6 +60,32 @@ describe('discretePid', () => {
     v.forEach((x, k) => expect(x).toBeCloseTo(p[k], 9));
   });
 
+  /** Runs the separate-term recursion of `terms`. */
+  function runTerms(t: NonNullable<ReturnType<typeof discretePid>['terms']>, e: number[]): number[] {
+    let i = 0;
+    let d = 0;
+    return e.map((ek, k) => {
+      const prev = e[k - 1] ?? 0;
+      i += t.i0 * ek + t.i1 * prev;
+      d = t.ad * d + t.bd * (ek - prev);
+      return t.kp * ek + i + d;
+    });
+  }
+
+  it.each(
+    fixtures.controllers.flatMap((row) => (['backward-euler', 'tustin'] as const).map((method) => ({ ...row, method }))),
+  )('gives the same output from separate P, I, D terms as from C(z) for $controller.form, $method', ({ controller, ts, method }) => {
+    const pid = discretePid(controller, ts, { method });
+    expect(pid.terms).not.toBeNull();
+    const e = Array.from({ length: 30 }, (_, k) => Math.cos(0.4 * k) + (k > 5 ? 1 : 0));
+    const combined = run(pid, e);
+    runTerms(pid.terms!, e).forEach((u, k) => expect(u).toBeCloseTo(combined[k], 9));
+  });
+
+  it('prints the separate terms of a PI as a PLC would run them', () => {
+    expect(discretePid({ form: 'ideal', kc: 2, ti: 20 }, 0.5).terms!.equation).toBe('P[k] = 2·e[k]; I[k] = I[k−1] + 0.05·e[k]; u[k] = P[k] + I[k]');
+  });
+
   it('writes the velocity form with the increment and its accumulation', () => {
     const pid = discretePid({ form: 'ideal', kc: 2, ti: 20 }, 0.5, { form: 'velocity' });
     expect(pid.a).toEqual([1]);
