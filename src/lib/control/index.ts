@@ -35,3 +35,4 @@ export {
   type RuleRange,
 } from './tuning/rules';
 export type { TuneResult, TunedController, TuningModel, RuleId, ControllerKind, TuneOptions } from './tuning/schema';
+export { simulateLimitedLoop, type LimitedLoopRequest, type LimitedLoopResponse, type AntiWindup } from './actuator-limits';
