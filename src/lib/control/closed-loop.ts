@@ -13,7 +13,7 @@ import { add, degree, multiply } from './polynomial';
 import { cascade, discretizeStates as discretize, toStateSpace } from './state-space';
 import { impulseResponse, stepResponse, type TimeResponse } from './simulate';
 import { roots } from './roots';
-import { gridStep } from './time-grid';
+import { gridStep, timeGrid } from './time-grid';
 
 /** The loop's blocks: controller C (may be improper), plant G and sensor H with their dead times. */
 export interface Loop {
@@ -82,7 +82,7 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
   const [cz, cm] = ss.c;
   const [dz, dm] = ss.d;
   // Known forcing by the load step: z2 = G_R·d and m2 = H_R·G_R·d, exact on the internal grid.
-  const inner = Array.from({ length: steps + 1 }, (_, i) => i * h);
+  const inner = input === 'load' ? timeGrid(steps * h, steps + 1) : [];
   const z2 = input === 'load' ? stepResponse(gR, inner).y : null;
   const z2Rate = input === 'load' ? impulseResponse(gR, inner).y : null;
   const m2 = input === 'load' ? stepResponse({ num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 }, inner).y : null;
@@ -100,25 +100,23 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
   let x: Float64Array = new Float64Array(n);
   let xn: Float64Array = new Float64Array(n);
   const pred = new Float64Array(n);
-  const delayed = (tau: number, upTo: number): number => {
-    if (tau < -1e-9 * h) return 0;
-    const f = Math.max(0, tau / h);
-    const j = Math.min(Math.floor(f), upTo);
-    if (j >= upTo) return mHist[upTo];
-    return mHist[j] + (f - j) * (mHist[j + 1] - mHist[j]);
-  };
   let cmg1 = dm;
   for (let k = 0; k < n; k++) cmg1 += cm[k] * g1[k];
+  // The step divides θ when θ ≥ h, so the delayed measurement is the stored sample `lag` back.
+  const lag = theta >= h ? Math.round(theta / h) : 0;
+  const zero = new Float64Array(steps + 1);
+  const zF = z2 ?? zero, zRateF = z2Rate ?? zero, mF = m2 ?? zero;
   let e = r;
   for (let i = 0; i <= steps; i++) {
-    let zi = dz * e + (z2 ? z2[i] : 0);
-    let mi = dm * e + (m2 ? m2[i] : 0);
+    let zi = dz * e + zF[i];
+    let mi = dm * e + mF[i];
+    let zr = czB * e + zRateF[i];
     for (let k = 0; k < n; k++) {
-      zi += cz[k] * x[k];
-      mi += cm[k] * x[k];
+      const xk = x[k];
+      zi += cz[k] * xk;
+      mi += cm[k] * xk;
+      zr += czA[k] * xk;
     }
-    let zr = czB * e + (z2Rate ? z2Rate[i] : 0);
-    for (let k = 0; k < n; k++) zr += czA[k] * x[k];
     zHist[i] = zi;
     zRate[i] = zr;
     mHist[i] = mi;
@@ -129,14 +127,14 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
       for (let b = 0; b < n; b++) s += phi[row + b] * x[b];
       pred[a] = s;
     }
-    const tau = (i + 1) * h - theta;
     let eNext: number;
-    if (tau <= i * h + 1e-12 * h) {
-      eNext = r - delayed(tau, i);
+    if (lag > 0) {
+      const j = i + 1 - lag;
+      eNext = j >= 0 ? r - mHist[j] : r;
     } else {
-      // θ < h: m at tau lies inside this step and depends on e(i+1) itself (linear, solved directly).
-      const alpha = (tau - i * h) / h;
-      let beta = m2 ? m2[i + 1] : 0;
+      // θ < h: m at (i+1)h − θ lies inside this step and depends on e(i+1) itself (linear, solved directly).
+      const alpha = 1 - theta / h;
+      let beta = mF[i + 1];
       for (let k = 0; k < n; k++) beta += cm[k] * pred[k];
       eNext = (r - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
     }

@@ -53,10 +53,12 @@ export function fromFactors(gain: number, zeros: Complex[], poles: Complex[], de
 }
 
 /**
- * p(jw) as magnitude and angle (rad, principal). Above w = 1 the reversed polynomial is evaluated
- * at 1/(jw) and the power w^n kept apart, so the caller can combine blocks without overflow.
+ * p(jw) = (jw)^k·(re + j·im)·e^(logScale): below w = 1 by Horner in jw (k = 0, logScale = 0);
+ * above, the reversed polynomial at 1/(jw), so the caller can combine blocks without overflow.
  */
-function polyAtJw(p: readonly number[], w: number): { logScale: number; mag: number; arg: number } {
+interface PolyValue { re: number; im: number; quarterTurns: number }
+
+function polyAtJw(p: readonly number[], w: number, out: PolyValue): void {
   const n = p.length - 1;
   let re = 0, im = 0;
   if (w <= 1) {
@@ -65,7 +67,8 @@ function polyAtJw(p: readonly number[], w: number): { logScale: number; mag: num
       im = re * w;
       re = r;
     }
-    return { logScale: 0, mag: Math.hypot(re, im), arg: Math.atan2(im, re) };
+    out.re = re; out.im = im; out.quarterTurns = 0;
+    return;
   }
   // q(y) = Σ p[i]·y^i with y = 1/(jw) = −j/w, so p(jw) = (jw)^n·q(y).
   const y = -1 / w;
@@ -74,27 +77,54 @@ function polyAtJw(p: readonly number[], w: number): { logScale: number; mag: num
     im = re * y;
     re = r;
   }
-  return { logScale: n * Math.log(w), mag: Math.hypot(re, im), arg: Math.atan2(im, re) + (n * Math.PI) / 2 };
+  out.re = re; out.im = im; out.quarterTurns = n;
 }
 
-/** |G(jw)| and the Horner phase (rad) modulo 2π, block by block. */
+const scratch: PolyValue = { re: 0, im: 0, quarterTurns: 0 };
+
+/** |G(jw)| and the Horner phase (rad, within a multiple of 2π), block by block. */
 function hornerAt(m: FactoredModel, w: number): { mag: number; arg: number } {
-  let logScale = 0, mag = Math.abs(m.gain) === 0 ? 0 : 1, arg = 0;
+  let logScale = 0, turns = 0, re = 1, im = 0;
+  const big = w > 1;
   for (const b of m.blocks) {
-    const n = polyAtJw(b.num, w);
-    const d = polyAtJw(b.den, w);
-    logScale += n.logScale - d.logScale;
-    mag *= n.mag / d.mag;
-    arg += n.arg - d.arg;
+    polyAtJw(b.num, w, scratch);
+    let r = re * scratch.re - im * scratch.im;
+    im = re * scratch.im + im * scratch.re;
+    re = r;
+    turns += scratch.quarterTurns;
+    polyAtJw(b.den, w, scratch);
+    const d = scratch.re * scratch.re + scratch.im * scratch.im;
+    r = (re * scratch.re + im * scratch.im) / d;
+    im = (im * scratch.re - re * scratch.im) / d;
+    re = r;
+    turns -= scratch.quarterTurns;
+    // Keep the running product near 1 so that long chains neither overflow nor underflow.
+    const a = Math.abs(re) + Math.abs(im);
+    if (a > 1e100 || (a < 1e-100 && a > 0)) { re /= a; im /= a; logScale += Math.log(a); }
   }
-  return { mag: mag * Math.exp(logScale), arg };
+  // Above w = 1 each polynomial was evaluated as (jw)^n·q(1/(jw)): the powers of w net out here.
+  const mag = Math.hypot(re, im) * (big && turns !== 0 ? Math.pow(w, turns) : 1) * (logScale !== 0 ? Math.exp(logScale) : 1);
+  return { mag, arg: Math.atan2(im, re) + (turns * Math.PI) / 2 };
+}
+
+/** atan2 to within 0.004 rad — enough to choose a 360° branch (Rajan et al. 2006 polynomial). */
+function roughAtan2(y: number, x: number): number {
+  const ax = Math.abs(x), ay = Math.abs(y);
+  if (ax === 0 && ay === 0) return 0;
+  const swap = ay > ax;
+  const t = swap ? ax / ay : ay / ax;
+  let a = t * (Math.PI / 4 + 0.273 * (1 - t));
+  if (swap) a = Math.PI / 2 - a;
+  if (x < 0) a = Math.PI - a;
+  return y < 0 ? -a : a;
 }
 
 /** Root-angle phase in rad (the contract's definition, before the dead time). */
-function rootPhase(m: FactoredModel, w: number): number {
+function rootPhase(m: FactoredModel, w: number, exact: boolean): number {
+  const at = exact ? Math.atan2 : roughAtan2;
   let ph = m.gain < 0 ? Math.PI : 0;
-  for (let i = 0; i < m.zr.length; i++) ph += Math.atan2(w - m.zi[i], -m.zr[i]);
-  for (let i = 0; i < m.pr.length; i++) ph -= Math.atan2(w - m.pi[i], -m.pr[i]);
+  for (let i = 0; i < m.zr.length; i++) ph += at(w - m.zi[i], -m.zr[i]);
+  for (let i = 0; i < m.pr.length; i++) ph -= at(w - m.pi[i], -m.pr[i]);
   return ph;
 }
 
@@ -118,7 +148,7 @@ export function phaseAt(m: FactoredModel, w: number): number {
 
 /** Magnitude and continuous phase together (one evaluation). */
 export function pointAt(m: FactoredModel, w: number): { mag: number; phaseDeg: number } {
-  const branch = rootPhase(m, w);
+  const branch = rootPhase(m, w, !m.blocks.length);
   if (!m.blocks.length) return { mag: magnitudeAt(m, w), phaseDeg: (branch - w * m.delay) * DEG };
   const h = hornerAt(m, w);
   const turns = Math.round((branch - h.arg) / (2 * Math.PI));
@@ -188,5 +218,7 @@ export function autoGrid(m: FactoredModel, options: GridOptions = {}): number[] 
   const lo = Math.log10(Math.min(...scales)) - (options.decadesBelow ?? 2);
   const hi = Math.log10(Math.max(...scales)) + (options.decadesAbove ?? 2);
   const n = Math.max(2, options.points ?? 200);
-  return Array.from({ length: n }, (_, i) => 10 ** (lo + ((hi - lo) * i) / (n - 1)));
+  const w = new Array<number>(n);
+  for (let i = 0; i < n; i++) w[i] = 10 ** (lo + ((hi - lo) * i) / (n - 1));
+  return w;
 }

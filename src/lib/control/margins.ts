@@ -8,13 +8,13 @@
  * function. With dead time the phase crosses −180° endlessly; at most maxPhaseCrossovers are listed.
  */
 import type { Margins } from './types';
-import { type FactoredModel, magnitudeAt, phaseAt } from './frequency';
+import { type FactoredModel, magnitudeAt, phaseAt, pointAt } from './frequency';
 import { bisectLog, maximizeLog, scanGrid } from './scan-grid';
 
 const DEG = Math.PI / 180;
 
 export interface MarginOptions {
-  /** Most phase crossovers listed (lowest first); default 10. */
+  /** Most phase crossovers listed (lowest first); default 6. */
   maxPhaseCrossovers?: number;
 }
 
@@ -24,8 +24,9 @@ export function reduceDeg(x: number): number {
 }
 
 function sensitivity(m: FactoredModel, w: number): { s: number; t: number } {
-  const mag = magnitudeAt(m, w);
-  const ph = phaseAt(m, w) * DEG;
+  const p = pointAt(m, w);
+  const mag = p.mag;
+  const ph = p.phaseDeg * DEG;
   const re = 1 + mag * Math.cos(ph), im = mag * Math.sin(ph);
   const d = Math.hypot(re, im);
   return { s: 1 / d, t: mag / d };
@@ -43,14 +44,21 @@ function lowFrequencyGain(m: FactoredModel): number {
 }
 
 export function margins(m: FactoredModel, options: MarginOptions = {}): Margins {
-  const maxPhase = options.maxPhaseCrossovers ?? 10;
+  const maxPhase = options.maxPhaseCrossovers ?? 6;
   const w = scanGrid(m);
   const n = w.length;
   const logMag = new Float64Array(n);
   const phase = new Float64Array(n);
+  const sens = new Float64Array(n);
+  const comp = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    logMag[i] = Math.log(magnitudeAt(m, w[i]));
-    phase[i] = phaseAt(m, w[i]);
+    const p = pointAt(m, w[i]);
+    logMag[i] = Math.log(p.mag);
+    phase[i] = p.phaseDeg;
+    const ph = p.phaseDeg * DEG;
+    const d = Math.hypot(1 + p.mag * Math.cos(ph), p.mag * Math.sin(ph));
+    sens[i] = 1 / d;
+    comp[i] = p.mag / d;
   }
   const logMagAt = (x: number) => Math.log(magnitudeAt(m, x));
   const gainCrossovers: number[] = [];
@@ -76,7 +84,7 @@ export function margins(m: FactoredModel, options: MarginOptions = {}): Margins 
   const wpc = phaseCrossovers.length ? phaseCrossovers[0] : null;
   const phaseMarginDeg = wgc === null ? null : reduceDeg(180 + phaseAt(m, wgc));
   const gainMargin = wpc === null ? null : 1 / magnitudeAt(m, wpc);
-  const peaks = peakSensitivities(m, w);
+  const peaks = peakSensitivities(m, w, sens, comp);
   return {
     gainMargin,
     gainMarginDb: gainMargin === null ? null : 20 * Math.log10(gainMargin),
@@ -86,19 +94,18 @@ export function margins(m: FactoredModel, options: MarginOptions = {}): Margins 
     delayMargin: phaseMarginDeg === null || wgc === null ? null : (phaseMarginDeg * DEG) / wgc,
     ms: peaks.ms,
     mt: peaks.mt,
-    bandwidth: bandwidth(m, w),
+    bandwidth: bandwidth(m, w, comp),
     gainCrossovers,
     phaseCrossovers,
   };
 }
 
-function peakSensitivities(m: FactoredModel, w: number[]): { ms: number; mt: number } {
+function peakSensitivities(m: FactoredModel, w: number[], sens: Float64Array, comp: Float64Array): { ms: number; mt: number } {
   let is = 0, it = 0, ms = 0, mt = 0;
-  const values = w.map((x) => sensitivity(m, x));
-  values.forEach((v, i) => {
-    if (v.s > ms) { ms = v.s; is = i; }
-    if (v.t > mt) { mt = v.t; it = i; }
-  });
+  for (let i = 0; i < w.length; i++) {
+    if (sens[i] > ms) { ms = sens[i]; is = i; }
+    if (comp[i] > mt) { mt = comp[i]; it = i; }
+  }
   const refine = (i: number, key: 's' | 't', best: number) => {
     if (i === 0 || i === w.length - 1) return best;
     return Math.max(best, maximizeLog((x) => sensitivity(m, x)[key], w[i - 1], w[i + 1]).value);
@@ -117,16 +124,16 @@ function peakSensitivities(m: FactoredModel, w: number[]): { ms: number; mt: num
   return { ms, mt };
 }
 
-function bandwidth(m: FactoredModel, w: number[]): number | null {
+function bandwidth(m: FactoredModel, w: number[], comp: Float64Array): number | null {
   const l0 = lowFrequencyGain(m);
   const t0 = Number.isFinite(l0) ? Math.abs(l0 / (1 + l0)) : 1;
   if (!(t0 > 0) || !Number.isFinite(t0)) return null;
   const target = t0 / Math.SQRT2;
   const f = (x: number) => sensitivity(m, x).t - target;
-  let prev = f(w[0]);
+  let prev = comp[0] - target;
   if (prev < 0) return null;
   for (let i = 1; i < w.length; i++) {
-    const v = f(w[i]);
+    const v = comp[i] - target;
     if (v < 0) return bisectLog(f, w[i - 1], w[i], prev);
     prev = v;
   }

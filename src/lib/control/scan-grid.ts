@@ -7,7 +7,7 @@
 import type { FactoredModel } from './frequency';
 import { magnitudeAt, timeScales } from './frequency';
 
-const PER_DECADE = 24;
+const PER_DECADE = 16;
 
 export function scanGrid(m: FactoredModel): number[] {
   const scales = timeScales(m);

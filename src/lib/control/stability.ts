@@ -58,7 +58,7 @@ export function nyquistUnstableCount(m: FactoredModel): number {
   const axis = m.poles.filter((p) => onAxis(p) && p.im >= 0);
   const origin = axis.filter((p) => p.im === 0 || Math.abs(p.im) <= AXIS_TOL * Math.hypot(p.re, p.im)).length;
   const scales = timeScales(m);
-  const eps = Math.min(...scales) * 1e-4;
+  const eps = Math.min(...scales) * 1e-3;
   const wEnd = endFrequency(m, scales);
   // Split the positive imaginary axis at the poles on it (indented to the right).
   const cuts = [...new Set(axis.map((p) => Math.abs(p.im)).filter((w) => w > eps))].sort((a, b) => a - b);
@@ -102,7 +102,7 @@ function endFrequency(m: FactoredModel, scales: number[]): number {
 /** Continuous change of arg(1 + L(jw)) from a to b, refined until each step turns less than 30°. */
 function trackArgument(m: FactoredModel, a: number, b: number): { delta: number; closest: number } {
   const decades = Math.log10(b / a);
-  const n = Math.max(2, Math.ceil(decades * 16));
+  const n = Math.max(2, Math.ceil(decades * 10));
   let prevW = a;
   let prev = onePlusL(m, a);
   let delta = 0;

@@ -4,7 +4,10 @@ import { ModelError } from './types';
 /** points samples evenly spaced from 0 to tFinal inclusive. */
 export function timeGrid(tFinal: number, points: number): number[] {
   const dt = tFinal / (points - 1);
-  return Array.from({ length: points }, (_, k) => (k === points - 1 ? tFinal : k * dt));
+  const t = new Array<number>(points);
+  for (let k = 0; k < points - 1; k++) t[k] = k * dt;
+  t[points - 1] = tFinal;
+  return t;
 }
 
 /** The common spacing of an evenly spaced grid; throws when the grid is not evenly spaced. */
