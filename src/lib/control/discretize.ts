@@ -16,10 +16,10 @@ import { ModelError } from './types';
 export const DiscretizeRequestSchema = z.object({
   tf: TransferFunctionSchema,
   /** Sample time in s. */
-  ts: z.number().finite().positive(),
+  ts: z.number().positive(),
   method: z.enum(['zoh', 'tustin']),
   /** Tustin only: frequency in rad/s where the discrete response matches exactly (0 < w < π/ts). */
-  prewarp: z.number().finite().positive().optional(),
+  prewarp: z.number().positive().optional(),
 });
 export type DiscretizeRequest = z.input<typeof DiscretizeRequestSchema>;
 

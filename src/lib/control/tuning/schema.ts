@@ -8,7 +8,7 @@ const seconds = z.number().positive();
 export const UltimateSchema = z.object({
   type: z.literal('ultimate'),
   /** Ultimate gain Ku: the proportional gain at sustained oscillation. */
-  ku: z.number().finite().positive(),
+  ku: z.number().positive(),
   /** Ultimate period Pu in s. */
   pu: seconds,
 });
