@@ -1,14 +1,40 @@
 import fs from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { demoAccount, signInPage } from '../support/session';
 
-/** Opens a path and waits until the island `id` has hydrated and drawn its first chart. */
+/**
+ * Opens a page as the demo reader (pages need a session; the server must be started with
+ * `seed: true`) and waits until the island `id` has hydrated and drawn its first chart.
+ */
 export async function openIsland(browser: Browser, url: string, id: string, options: { width?: number } = {}): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: options.width ?? 1366, height: 900 }, acceptDownloads: true });
-  await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: new URL(url).origin });
+  const origin = new URL(url).origin;
+  const storageState = await readerSession(browser, origin);
+  const context = await browser.newContext({ viewport: { width: options.width ?? 1366, height: 900 }, acceptDownloads: true, storageState });
+  await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin });
   const page = await context.newPage();
   await page.goto(url);
   await waitForIsland(page, id);
   return page;
+}
+
+type StorageState = Awaited<ReturnType<BrowserContext['storageState']>>;
+const sessions = new Map<string, Promise<StorageState>>();
+
+/** Signs the demo reader in once per server and reuses the cookie (sign-in is rate-limited). */
+function readerSession(browser: Browser, origin: string): Promise<StorageState> {
+  let session = sessions.get(origin);
+  if (!session) {
+    session = (async () => {
+      const context = await browser.newContext();
+      const reader = demoAccount('reader');
+      await signInPage(await context.newPage(), origin, reader.email, reader.password);
+      const state = await context.storageState();
+      await context.close();
+      return state;
+    })();
+    sessions.set(origin, session);
+  }
+  return session;
 }
 
 /** Scrolls the island into view (client:visible hydrates it) and waits for a drawn canvas or a table. */

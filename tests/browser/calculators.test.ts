@@ -3,6 +3,7 @@ import type { Browser } from 'playwright-core';
 import { startServer, type RunningServer } from '../support/server';
 import { artifactPath, launchChromium } from '../support/browser';
 import { download, openIsland, pngSize, waitForIsland } from './calculators-support';
+import { signInAs } from '../support/session';
 
 const LOOP = 'htst-tic210';
 
@@ -11,7 +12,7 @@ describe('calculator islands in Chromium', () => {
   let browser: Browser;
   let page_url: string;
   beforeAll(async () => {
-    server = await startServer();
+    server = await startServer({ seed: true });
     browser = await launchChromium();
     page_url = `${server.url}/calculators`;
   });
@@ -21,7 +22,8 @@ describe('calculator islands in Chromium', () => {
   });
 
   it('shows the step information at first paint, before any script runs', async () => {
-    const html = await (await fetch(page_url)).text();
+    const cookie = await signInAs(server.url, 'reader');
+    const html = await (await fetch(page_url, { headers: { Cookie: cookie } })).text();
     expect(html).toContain(`data-testid="${LOOP}-overshoot"`);
     // React separates adjacent text with comments in server HTML.
     expect(html.replace(/<!-- -->/g, "")).toMatch(/HOLDS<\/span><span>Overshoot \(setpoint step\)/);
