@@ -69,16 +69,19 @@ function ultimatePoint(model: ProcessModel): TuningModel | null {
   return { type: 'ultimate', ku: m.gainMargin, pu: (2 * Math.PI) / m.phaseCrossover };
 }
 
-/** The models each rule may be given for this input model, first choice first. */
-function candidates(model: ProcessModel, rule: TuningRule, controller: 'pi' | 'pid'): { tunedOn: TuningModel; via: ComparisonRow['via'] }[] {
+type Choice = { tunedOn: TuningModel; via: ComparisonRow['via'] } | { reason: string };
+
+/** The model a rule is given for this input model, or why there is none. */
+function choose(model: ProcessModel, rule: TuningRule, controller: 'pi' | 'pid'): Choice {
   const covers = (type: TuningModel['type']) => rule.cases.some((c) => c.model === type && c.controller === controller);
-  if (covers(model.type)) return [{ tunedOn: model, via: 'model' }];
-  if (model.type === 'sopdt' && covers('fopdt')) return [{ tunedOn: halfRule(model), via: 'half-rule' }];
+  if (covers(model.type)) return { tunedOn: model, via: 'model' };
+  if (model.type === 'sopdt' && covers('fopdt')) return { tunedOn: halfRule(model), via: 'half-rule' };
   if (covers('ultimate')) {
     const point = ultimatePoint(model);
-    return point ? [{ tunedOn: point, via: 'ultimate-point' }] : [];
+    if (point) return { tunedOn: point, via: 'ultimate-point' };
+    return { reason: `${rule.name} needs an ultimate point, and this model's phase never reaches −180°.` };
   }
-  return [];
+  return { reason: `${rule.name} has no ${controller.toUpperCase()} rule for a ${model.type} model.` };
 }
 
 function asPid(c: TunedController, n: number): PidController {
@@ -114,9 +117,9 @@ export function compareRules(input: CompareRequest | unknown): Comparison {
   const rows: ComparisonRow[] = [];
   const skipped: ComparisonSkip[] = [];
   for (const rule of tuningRules) {
-    const [choice] = candidates(model, rule, controller);
-    if (!choice) {
-      skipped.push({ rule: rule.id, reason: `${rule.name} has no ${controller.toUpperCase()} rule for a ${model.type} model.` });
+    const choice = choose(model, rule, controller);
+    if ('reason' in choice) {
+      skipped.push({ rule: rule.id, reason: choice.reason });
       continue;
     }
     try {

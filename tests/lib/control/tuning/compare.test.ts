@@ -108,6 +108,8 @@ describe('compareRules', () => {
     expect(rows.map((r) => r.rule)).toEqual(['simc', 'lambda', 'imc']);
     expect(skipped.map((s) => s.rule)).toEqual(['zn-open-loop', 'zn-ultimate', 'cohen-coon', 'amigo']);
     for (const s of skipped) expect(s.reason.length).toBeGreaterThan(10);
+    // K/(τs+1) has phase above −90°: no ultimate point (handbook fact)
+    expect(skipped.find((s) => s.rule === 'zn-ultimate')!.reason).toMatch(/never reaches −180°/);
   });
 
   it('refuses a bad request naming the field', () => {
