@@ -6,6 +6,7 @@ import { asFopdt, requireDeadTime } from './guards';
  * Edgar & Mellichamp, Process Dynamics and Control, table of Cohen–Coon settings):
  * - PI:  kc = (τ/(Kθ))(0.9 + r/12),   ti = θ(30 + 3r)/(9 + 20r)
  * - PID: kc = (τ/(Kθ))(4/3 + r/4),    ti = θ(32 + 6r)/(13 + 8r),   td = 4θ/(11 + 2r)
+ * Written from memory of that table (the 1953 paper states them as charts and formulas in R, L).
  */
 export const cohenCoon: TuningRule = {
   id: 'cohen-coon',

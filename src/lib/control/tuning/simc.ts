@@ -8,6 +8,7 @@ import type { TuningModel, TuneOptions } from './schema';
  * - fopdt PI:  kc = τ/(K(τc+θ)),  ti = min(τ, 4(τc+θ))
  * - sopdt PID (series form): kc = τ1/(K(τc+θ)), ti = min(τ1, 4(τc+θ)), td = τ2
  * - ipdt PI:   kc = 1/(K'(τc+θ)),  ti = 4(τc+θ)   (K' the slope gain)
+ * Written from memory of the paper; its half-rule example and margin figures are checked in tests.
  */
 function closedLoopHorizon(model: TuningModel, options: TuneOptions): number {
   const theta = 'theta' in model ? model.theta : 0;

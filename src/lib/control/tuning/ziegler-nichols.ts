@@ -8,6 +8,7 @@ const source =
  * Reaction-curve rule, with the slope R = K/τ and lag L = θ of the step response, a = R·L = Kθ/τ:
  * - PI:  kc = 0.9/a,  ti = 10θ/3 (the paper's 3.33 L)
  * - PID: kc = 1.2/a,  ti = 2θ,  td = θ/2
+ * (the paper's table, written from memory; the PI ti is the contract's 10θ/3)
  */
 export const zieglerNicholsOpenLoop: TuningRule = {
   id: 'zn-open-loop',
