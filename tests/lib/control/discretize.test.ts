@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { discretize } from '../../../src/lib/control/discretize';
 import fixtures from '../../reference/fixtures/discrete.json';
@@ -92,5 +93,42 @@ describe('discretize', () => {
     const error = modelErrorOf(() => discretize(request));
     expect(error.code).toBe(code);
     expect(error.field).toBe(field);
+  });
+});
+
+describe('discretize (properties)', () => {
+  // Random stable lags (τ from 0.05 s to 200 s), gains and sample times.
+  const lags = fc.array(fc.double({ min: 0.05, max: 200, noNaN: true }), { minLength: 1, maxLength: 5 });
+  const gain = fc.double({ min: -50, max: 50, noNaN: true }).filter((k) => Math.abs(k) > 1e-3);
+  const ts = fc.double({ min: 0.01, max: 5, noNaN: true });
+  const build = (k: number, taus: number[]) => ({
+    num: [k],
+    den: taus.reduce<number[]>((p, tau) => p.map((c, i) => c * tau + (p[i - 1] ?? 0)).concat(p[p.length - 1]), [1]),
+  });
+  const sum = (p: number[]) => p.reduce((a, b) => a + b, 0);
+
+  // With poles near z = 1 (ts ≪ τ) the monomial coefficients carry G(1) as a small difference:
+  // the attainable accuracy is about eps·Σ|den|/|Σden| (the condition number of that sum).
+  it('keeps the static gain G(z=1) = G(s=0) for ZOH and Tustin within the conditioning of den(1) (both map s = 0 to z = 1; definition)', () => {
+    fc.assert(
+      fc.property(gain, lags, ts, fc.constantFrom('zoh' as const, 'tustin' as const), (k, taus, h, method) => {
+        const tf = build(k, taus);
+        const g = discretize({ tf, ts: h, method });
+        const condition = sum(g.den.map(Math.abs)) / Math.abs(sum(g.den));
+        expect(Math.abs(sum(g.num) / sum(g.den) / k - 1)).toBeLessThan(1e-12 * condition);
+      }),
+      { numRuns: 150 },
+    );
+  });
+
+  it('puts the ZOH poles at e^(−ts/τ) for a chain of lags (definition of the hold equivalent)', () => {
+    fc.assert(
+      fc.property(gain, lags, ts, (k, taus, h) => {
+        const g = discretize({ tf: build(k, taus), ts: h, method: 'zoh' });
+        const expected = taus.reduce<number[]>((p, tau) => p.map((c, i) => c - Math.exp(-h / tau) * (p[i - 1] ?? 0)).concat(-Math.exp(-h / tau) * p[p.length - 1]), [1]);
+        g.den.forEach((c, i) => expect(c).toBeCloseTo(expected[i], 8));
+      }),
+      { numRuns: 150 },
+    );
   });
 });

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseTransferFunction } from '../../../src/lib/control/parse';
 import { modelErrorOf } from './helpers';
@@ -67,5 +68,25 @@ describe('parseTransferFunction', () => {
     expect(error.code).toBe('invalid_request');
     expect(error.field).toBe('plant.expression');
     expect(error.message).toMatch(reason);
+  });
+});
+
+describe('parseTransferFunction (properties)', () => {
+  it('reads back K·exp(−θs)/Π(τᵢs+1) typed with implicit multiplication (expansion of the product by hand rule)', () => {
+    const number = fc.double({ min: 0.01, max: 500, noNaN: true }).map((x) => Number(x.toPrecision(4)));
+    fc.assert(
+      fc.property(number, fc.double({ min: 0, max: 100, noNaN: true }).map((x) => Number(x.toFixed(2))), fc.array(number, { minLength: 1, maxLength: 4 }), (k, theta, taus) => {
+        const text = `${k}*exp(-${theta}s)/(${taus.map((tau) => `(${tau}s+1)`).join('')})`;
+        const g = parseTransferFunction(text);
+        const den = taus.reduce<number[]>((p, tau) => p.map((c, i) => c * tau + (p[i - 1] ?? 0)).concat(p[p.length - 1]), [1]);
+        expect(g.delay).toBeCloseTo(theta, 12);
+        expect(g.num).toHaveLength(1);
+        expect(g.den).toHaveLength(den.length);
+        const f = g.den[0] / den[0];
+        expect(g.num[0] / f).toBeCloseTo(k, 9);
+        g.den.forEach((c, i) => expect(Math.abs(c / f - den[i])).toBeLessThanOrEqual(1e-12 * Math.max(...den.map(Math.abs))));
+      }),
+      { numRuns: 150 },
+    );
   });
 });
