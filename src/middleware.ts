@@ -23,12 +23,10 @@ export const onRequest = defineMiddleware(async (context, next) => {
     console.error('Database not ready:', err instanceof Error ? err.message : err);
     return next();
   }
-  if (path !== '/api/health') {
-    const blockers = await productionBlockers();
-    if (blockers.length) {
-      const message = `Loopwright is not ready for production: ${blockers.join(' ')}`;
-      return Response.json({ error: { code: 'not_configured', message } }, { status: 503 });
-    }
+  const blockers = await productionBlockers();
+  if (blockers.length) {
+    const message = `Loopwright refuses to serve in production: ${blockers.join(' ')}`;
+    return Response.json({ error: { code: 'not_configured', message } }, { status: 503 });
   }
   if (isSessionFree(path) || path.startsWith('/api/auth/')) return next();
 
