@@ -1,9 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { startServer, type RunningServer } from '../support/server';
 import { artifactPath, launchChromium } from '../support/browser';
 import { demoAccount } from '../support/session';
 import { lastMailTo, linkIn } from '../support/mail';
+
+/** Waits until the island has hydrated (its submit button is enabled), so typing is not replaced by hydration. */
+async function hydrated(page: Page, button: string): Promise<void> {
+  await page.getByRole('button', { name: button }).and(page.locator(':enabled')).waitFor({ timeout: 30_000 });
+}
 
 describe('signing in through the form in Chromium', () => {
   let server: RunningServer;
@@ -22,6 +27,7 @@ describe('signing in through the form in Chromium', () => {
     const { email, password, name } = demoAccount('curator');
     await page.goto(`${server.url}/admin/mail`);
     expect(new URL(page.url()).pathname).toBe('/sign-in');
+    await hydrated(page, 'Sign in');
     const form = page.getByTestId('sign-in-form');
     await form.getByLabel('Work e-mail').fill(email);
     await form.getByLabel('Password').fill('wrong-password-here');
@@ -49,6 +55,7 @@ describe('signing in through the form in Chromium', () => {
     const page = await browser.newPage();
     const admin = demoAccount('admin');
     await page.goto(`${server.url}/sign-in`);
+    await hydrated(page, 'Sign in');
     await page.getByLabel('Work e-mail').fill(admin.email);
     await page.getByLabel('Password').fill(admin.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
@@ -56,13 +63,17 @@ describe('signing in through the form in Chromium', () => {
     await page.getByRole('link', { name: 'Admin' }).click();
     await page.waitForURL(`${server.url}/admin/people`);
 
+    await hydrated(page, 'Send invitation');
     const form = page.getByTestId('invite-form');
     await form.getByLabel('Name').fill('Rosa Underhill');
     await form.getByLabel('Work e-mail').fill('rosa.underhill@brindlewood.example');
     await form.getByLabel('Role of the new person').selectOption('author');
     await form.getByRole('button', { name: 'Send invitation' }).click();
     const outcome = form.locator('[role="status"], [role="alert"]');
-    await outcome.waitFor({ timeout: 20_000 });
+    await outcome.waitFor({ timeout: 20_000 }).catch(async (err) => {
+      await page.screenshot({ path: artifactPath('admin-people-failed.png'), fullPage: true });
+      throw new Error(`No answer to the invitation: ${err}\n${server.output().slice(-2000)}`);
+    });
     expect(await outcome.textContent()).toContain('Invitation sent');
     const row = page.locator('[data-testid="person-row"][data-email="rosa.underhill@brindlewood.example"]');
     expect(await row.getByTestId('person-status').textContent()).toContain('Invited');
@@ -71,6 +82,7 @@ describe('signing in through the form in Chromium', () => {
     const link = linkIn(lastMailTo(server, 'rosa.underhill@brindlewood.example'), `${server.url}/invite?token=`);
     const invitee = await browser.newPage();
     await invitee.goto(link!);
+    await hydrated(invitee, 'Set my password');
     await invitee.getByLabel('New password').fill('pasteurizer-hold-line');
     await invitee.getByLabel('The same password again').fill('pasteurizer-hold-line');
     await invitee.getByRole('button', { name: 'Set my password' }).click();

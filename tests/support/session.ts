@@ -26,10 +26,33 @@ export async function signIn(baseUrl: string, email: string, password: string): 
   return cookies.join('; ');
 }
 
-/** Signs in as the demo account of `role`; returns the `Cookie` header value. */
+const sessions = new Map<string, Promise<string>>();
+
+/**
+ * Signs in as the demo account of `role` once per server and returns the `Cookie` header value;
+ * later calls reuse that session (sign-in is rate-limited per account). Use `signIn` for a
+ * fresh session, e.g. one a test will end.
+ */
 export function signInAs(baseUrl: string, role: Role): Promise<string> {
-  const a = demoAccount(role);
-  return signIn(baseUrl, a.email, a.password);
+  const key = `${baseUrl} ${role}`;
+  let cookie = sessions.get(key);
+  if (!cookie) {
+    const a = demoAccount(role);
+    cookie = signIn(baseUrl, a.email, a.password);
+    cookie.catch(() => sessions.delete(key));
+    sessions.set(key, cookie);
+  }
+  return cookie;
+}
+
+/** Puts the (shared, see signInAs) session of a demo role into a Playwright page's browser context. */
+export async function signInPageAs(page: Page, baseUrl: string, role: Role): Promise<void> {
+  const cookie = await signInAs(baseUrl, role);
+  const cookies = cookie.split('; ').map((pair) => {
+    const i = pair.indexOf('=');
+    return { name: pair.slice(0, i), value: pair.slice(i + 1), url: baseUrl };
+  });
+  await page.context().addCookies(cookies);
 }
 
 /** Headers for a JSON call with a session: Cookie, Origin (better-auth and our routes expect it on writes) and Content-Type. */
