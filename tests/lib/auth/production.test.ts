@@ -1,4 +1,7 @@
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+
+// Password hashing (scrypt) is deliberately slow; on a busy machine seeding four accounts takes seconds.
+vi.setConfig({ testTimeout: 60_000 });
 import { hashPassword } from 'better-auth/crypto';
 import { tempDatabase } from '../../support/temp-db';
 import { seedDemo } from '../../../src/lib/db/seed';
