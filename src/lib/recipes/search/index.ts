@@ -1,0 +1,106 @@
+import MiniSearch from 'minisearch';
+import type { RecipeRecord } from '../record';
+import type { RecipeStatus } from '../vocabulary';
+import { excerpt, highlight, type TextSegment } from './highlight';
+import { plainText } from './plain-text';
+
+/** What the index holds per recipe. */
+interface SearchDocument {
+  id: string;
+  title: string;
+  summary: string;
+  tags: string;
+  loopTags: string;
+  body: string;
+  status: RecipeStatus;
+  loopType: string;
+}
+
+/** One search hit, best first, with highlighted title and excerpt. */
+export interface SearchHit {
+  slug: string;
+  title: string;
+  score: number;
+  status: RecipeStatus;
+  loopType: string;
+  titleSegments: TextSegment[];
+  excerptSegments: TextSegment[];
+}
+
+export interface SearchOptions {
+  /** Include retired recipes (default: published only). */
+  includeRetired?: boolean;
+  /** At most this many hits (default 50). */
+  limit?: number;
+}
+
+/** Statuses the index holds: readers search published recipes, and retired ones on request. */
+const SEARCHABLE = new Set<RecipeStatus>(['published', 'retired']);
+
+/** Field boosts: a word in the title or a loop tag says more than one in the body. */
+const BOOST = { title: 4, loopTags: 3, tags: 2, summary: 1.5, body: 1 };
+
+/** Typos are forgiven in words of five letters or more; short words and tag parts must match. */
+function fuzziness(term: string): number | false {
+  return term.length >= 5 ? 0.2 : false;
+}
+
+function toDocument(r: RecipeRecord): SearchDocument {
+  const d = r.data;
+  return {
+    id: r.slug,
+    title: d.title,
+    summary: d.summary,
+    tags: d.tags.join(' '),
+    // "FIC-101" is found as "FIC-101", "fic 101" and "fic101".
+    loopTags: [...d.loopTags, ...d.loopTags.map((t) => t.replace('-', '')), ...(d.innerLoop ? [d.innerLoop.loopTag] : [])].join(' '),
+    body: plainText(r.body),
+    status: d.status,
+    loopType: d.loopType,
+  };
+}
+
+/** A MiniSearch index over the recipes that readers may find; updatable one recipe at a time. */
+export function createSearchIndex(records: RecipeRecord[] = []) {
+  const mini = new MiniSearch<SearchDocument>({
+    fields: ['title', 'summary', 'tags', 'loopTags', 'body'],
+    storeFields: ['title', 'summary', 'body', 'status', 'loopType'],
+    searchOptions: { boost: BOOST, prefix: true, fuzzy: fuzziness },
+  });
+
+  /** Puts a recipe in the index, replacing its older version; drafts and recipes in review leave it. */
+  function addOrReplace(record: RecipeRecord): void {
+    if (mini.has(record.slug)) mini.discard(record.slug);
+    if (SEARCHABLE.has(record.data.status)) mini.add(toDocument(record));
+  }
+
+  /** Takes a recipe out of the index; no-op when it is not there. */
+  function remove(slug: string): void {
+    if (mini.has(slug)) mini.discard(slug);
+  }
+
+  function search(query: string, options: SearchOptions = {}): SearchHit[] {
+    const q = query.trim();
+    if (!q) return [];
+    const allowRetired = options.includeRetired ?? false;
+    const results = mini.search(q, { filter: (r) => r.status === 'published' || (allowRetired && r.status === 'retired') });
+    return results.slice(0, options.limit ?? 50).map((r) => {
+      const inSummary = r.terms.some((t) => r.match[t]?.includes('summary'));
+      const source: string = inSummary || !r.terms.some((t) => r.match[t]?.includes('body')) ? r.summary : r.body;
+      return {
+        slug: String(r.id),
+        title: r.title,
+        score: r.score,
+        status: r.status,
+        loopType: r.loopType,
+        titleSegments: highlight(r.title, r.terms),
+        excerptSegments: highlight(excerpt(source, r.terms), r.terms),
+      };
+    });
+  }
+
+  for (const r of records) addOrReplace(r);
+  return { addOrReplace, remove, search, get size() { return mini.documentCount; } };
+}
+
+export type SearchIndex = ReturnType<typeof createSearchIndex>;
