@@ -45,6 +45,8 @@ export const RecipeFrontmatterSchema = CheckedLoopSchema.extend({
   supersededBy: slug.optional(),
   /** Whether following the recipe changes a running loop (shows the standard cautions). */
   changesRunningLoop: z.boolean().default(true),
+  /** Commissioning steps in order; the page and the printed sheet list them as a checklist. */
+  commissioning: z.array(z.string().min(3)).default([]),
   /** Cautions particular to this loop, shown with the standard ones. */
   cautions: z.array(z.string().min(3)).default([]),
 }).superRefine((r, ctx) => {
