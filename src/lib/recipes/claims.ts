@@ -13,7 +13,7 @@ export interface ClaimAnalyzeRequest {
   plant: { num: number[]; den: number[]; delay: number };
   sensor?: { num: number[]; den: number[]; delay?: number };
   controller: CheckedLoop['controller'];
-  analyses: { step: { input: Claim['input']; tFinal?: number; points: number }; margins: true };
+  analyses: { step: { input: Claim['input']; tFinal?: number; points: number }; margins: true; poles: true };
 }
 
 /** The engine's analyze (src/lib/control), passed in so this module stays free of it. */
@@ -50,7 +50,7 @@ export function checkLoopClaims(loop: CheckedLoop, analyze: Analyze, which: Loop
         plant: plantOf(loop.model),
         ...(loop.sensor ? { sensor: loop.sensor } : {}),
         controller: loop.controller,
-        analyses: { step: { input, points: STEP_POINTS, ...(loop.tFinal ? { tFinal: loop.tFinal } : {}) }, margins: true },
+        analyses: { step: { input, points: STEP_POINTS, ...(loop.tFinal ? { tFinal: loop.tFinal } : {}) }, margins: true, poles: true },
       });
       figures.set(input, f);
     }

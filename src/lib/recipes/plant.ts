@@ -1,4 +1,4 @@
-import { fromProcessModel } from '../control/process-model';
+import { fromProcessModel } from '../control';
 import type { ProcessModelInput } from '../schemas';
 
 /** The transfer function of a recipe's process model, through the engine's model helpers. */

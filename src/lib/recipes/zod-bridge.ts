@@ -1,7 +1,7 @@
 import type { z as z4 } from 'zod';
 
 /** The part of a zod-3 refinement context the bridge uses (astro/zod is zod 3.25). */
-interface Zod3Context {
+export interface Zod3Context {
   addIssue(issue: { code: 'custom'; message: string; path?: (string | number)[] }): void;
 }
 

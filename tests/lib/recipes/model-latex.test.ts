@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import katex from 'katex';
+import type { ProcessModelInput } from '../../../src/lib/schemas';
 import { modelLatex, polynomialLatex, transferFunctionLatex } from '../../../src/lib/recipes/model-latex';
 
 describe('polynomialLatex', () => {
@@ -17,11 +18,11 @@ describe('polynomialLatex', () => {
 
 describe('modelLatex', () => {
   it('writes each model type with its numbers, and KaTeX accepts every one', () => {
-    const cases = [
-      { model: { type: 'fopdt', k: 0.45, tau: 2.5, theta: 0.6 } as const, latex: '\\frac{0.45}{2.5\\,s + 1}\\,e^{-0.6\\,s}' },
-      { model: { type: 'sopdt', k: 0.9, tau1: 20, tau2: 4, theta: 5 } as const, latex: '\\frac{0.9}{(20\\,s + 1)(4\\,s + 1)}\\,e^{-5\\,s}' },
-      { model: { type: 'ipdt', k: 0.0125, theta: 0 } as const, latex: '\\frac{0.0125}{s}' },
-      { model: { type: 'tf', num: [-0.3], den: [120, 43, 1], delay: 6 } as const, latex: '\\frac{-0.3}{120\\,s^{2} + 43\\,s + 1}\\,e^{-6\\,s}' },
+    const cases: { model: ProcessModelInput; latex: string }[] = [
+      { model: { type: 'fopdt', k: 0.45, tau: 2.5, theta: 0.6 }, latex: '\\frac{0.45}{2.5\\,s + 1}\\,e^{-0.6\\,s}' },
+      { model: { type: 'sopdt', k: 0.9, tau1: 20, tau2: 4, theta: 5 }, latex: '\\frac{0.9}{(20\\,s + 1)(4\\,s + 1)}\\,e^{-5\\,s}' },
+      { model: { type: 'ipdt', k: 0.0125, theta: 0 }, latex: '\\frac{0.0125}{s}' },
+      { model: { type: 'tf', num: [-0.3], den: [120, 43, 1], delay: 6 }, latex: '\\frac{-0.3}{120\\,s^{2} + 43\\,s + 1}\\,e^{-6\\,s}' },
     ];
     for (const { model, latex } of cases) {
       expect(modelLatex(model)).toBe(latex);
