@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CheckedLoopSchema, InnerLoopSchema, IsoDateSchema, LoopTagSchema, LoopUnitsSchema, OwnerSchema, TuningRuleRefSchema } from './schema';
+import { CheckedLoopSchema, InnerLoopSchema, ModelChainSchema, IsoDateSchema, LoopTagSchema, LoopUnitsSchema, OwnerSchema, TuningRuleRefSchema } from './schema';
 import { AREA_CODES, LOOP_TYPES, RECIPE_STATUSES, STRUCTURES } from './vocabulary';
 
 const slug = z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'A slug is lower-case words joined by hyphens.');
@@ -25,6 +25,8 @@ export const RecipeFrontmatterSchema = CheckedLoopSchema.extend({
   units: LoopUnitsSchema,
   /** Where the model's numbers came from (step test, design data, vendor sheet). */
   modelSource: z.string().min(3),
+  /** The blocks the model was built from; the build checks that they multiply out to model and sensor. */
+  chain: ModelChainSchema.optional(),
   /** The loop structure the recipe describes. */
   structure: z.enum(STRUCTURES),
   /** How the controller was tuned. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ClaimSchema, PidControllerSchema, ProcessModelSchema, TransferFunctionSchema } from '../schemas';
+import { BlockSchema, ClaimSchema, PidControllerSchema, ProcessModelSchema, TransferFunctionSchema } from '../schemas';
 import { TUNING_RULE_IDS } from './vocabulary';
 
 /** An ISA-5.1 loop tag such as TIC-210, FIC-101A or PIC-400. */
@@ -58,4 +58,12 @@ export const InnerLoopSchema = CheckedLoopSchema.extend({
 export const OwnerSchema = z.object({
   name: z.string().min(2),
   email: z.email('Give the owner as an e-mail address.'),
+});
+
+/** The blocks a loop's model was built from (actuator → process → transport, and the sensor). */
+export const ModelChainSchema = z.object({
+  /** Blocks of the forward path in signal order; their product is the recipe's model. */
+  blocks: z.array(BlockSchema).min(1, 'Give at least one block.'),
+  /** The measurement block; it is the recipe's sensor. */
+  sensor: BlockSchema.optional(),
 });

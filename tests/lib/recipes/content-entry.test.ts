@@ -31,3 +31,34 @@ describe('checkRecipeEntry', () => {
     expect(issues.map((i) => i.path?.join('.'))).toEqual(expect.arrayContaining(['loopTags.0', 'retiredReason']));
   });
 });
+
+describe('checkRecipeEntry with a chain of blocks', () => {
+  // Series connection multiplies transfer functions and adds dead times (any control text, e.g.
+  // Seborg et al., Process Dynamics and Control, block-diagram algebra — common practice).
+  const chained = {
+    ...BASE_FRONTMATTER,
+    model: { type: 'tf', num: [-0.3], den: [120, 43, 1], delay: 6 },
+    sensor: { num: [1], den: [8, 1] },
+    controller: { form: 'ideal', kc: -4.4, ti: 42 },
+    chain: {
+      blocks: [
+        { kind: 'first-order', k: 1, tau: 3 },
+        { kind: 'first-order', k: -0.3, tau: 40 },
+        { kind: 'dead-time', theta: 6 },
+      ],
+      sensor: { kind: 'first-order', k: 1, tau: 8 },
+    },
+  };
+
+  it('accepts blocks that multiply out to the model and sensor', () => {
+    expect(collect(chained).issues).toEqual([]);
+  });
+
+  it('refuses blocks that do not, naming the recipe', () => {
+    const wrong = { ...chained, title: 'Wrong chain', chain: { ...chained.chain, blocks: chained.chain.blocks.slice(0, 2) } };
+    const { data, issues } = collect(wrong);
+    expect(data).toBeNull();
+    expect(issues.map((i) => i.path?.[0])).toEqual(['chain']);
+    expect(issues[0].message).toMatch(/Recipe "Wrong chain": its blocks multiply out to .* delay 0 s, which is not its model/);
+  });
+});
