@@ -20,6 +20,8 @@ const TIME_METRICS = new Set<Claim['metric']>(['overshootPct', 'riseTime', 'sett
 export function formatFigure(value: number | null, unit = ''): string {
   if (value === null || Number.isNaN(value)) return '—';
   if (!Number.isFinite(value)) return '∞';
+  // Round-off of a figure that is zero in exact arithmetic (e.g. 2e-14 % overshoot) reads as 0.
+  if (Math.abs(value) < 1e-9) value = 0;
   const text = Math.abs(value) >= 1000 ? value.toFixed(0) : Number(value.toPrecision(3)).toString();
   return unit ? `${text} ${unit}`.replace(' °', '°') : text;
 }
