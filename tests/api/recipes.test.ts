@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type RunningServer } from '../support/server';
 import { readRecipeFiles } from '../../src/lib/recipes/file-reader';
+import { signInAs } from '../support/session';
 
 const files = readRecipeFiles();
 const published = files.filter((r) => r.data.status === 'published');
@@ -8,9 +9,22 @@ const retired = files.filter((r) => r.data.status === 'retired');
 
 describe('GET /api/v1/recipes', () => {
   let server: RunningServer;
-  const get = (path: string) => fetch(`${server.url}${path}`);
+  let cookie: string;
+  const get = (path: string) => fetch(`${server.url}${path}`, { headers: { Cookie: cookie } });
   beforeAll(async () => {
     server = await startServer({ seed: true });
+    cookie = await signInAs(server.url, 'reader');
+  });
+
+  it('answers 401 unauthenticated without a session', async () => {
+    for (const path of ['/api/v1/recipes', '/api/v1/recipes/raw-milk-reception-flow', '/api/v1/search?q=flow']) {
+      const res = await fetch(`${server.url}${path}`);
+      expect(res.status, path).toBe(401);
+      expect((await res.json()).error.code).toBe('unauthenticated');
+    }
+    const page = await fetch(`${server.url}/recipes/raw-milk-reception-flow`, { redirect: 'manual' });
+    expect(page.status).toBe(302);
+    expect(page.headers.get('location')).toMatch(/^\/sign-in\?next=/);
   });
   afterAll(async () => {
     await server?.stop();
@@ -72,15 +86,18 @@ describe('GET /api/v1/recipes', () => {
 
 describe('GET /api/v1/search', () => {
   let server: RunningServer;
+  let cookie: string;
+  const get = (path: string) => fetch(`${server.url}${path}`, { headers: { Cookie: cookie } });
   beforeAll(async () => {
     server = await startServer({ seed: true });
+    cookie = await signInAs(server.url, 'reader');
   });
   afterAll(async () => {
     await server?.stop();
   });
 
   it('finds a recipe by a misspelled word, best first, published only', async () => {
-    const res = await fetch(`${server.url}/api/v1/search?q=pasturizer%20cascde`);
+    const res = await get('/api/v1/search?q=pasturizer%20cascde');
     expect(res.status).toBe(200);
     const { hits } = await res.json();
     expect(hits[0]).toMatchObject({ slug: 'htst-product-temperature-cascade' });
@@ -91,7 +108,7 @@ describe('GET /api/v1/search', () => {
   });
 
   it('answers a missing q with 400 invalid_request', async () => {
-    const res = await fetch(`${server.url}/api/v1/search`);
+    const res = await get('/api/v1/search');
     expect(res.status).toBe(400);
     expect((await res.json()).error).toMatchObject({ code: 'invalid_request', field: 'q' });
   });

@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { startServer, type RunningServer } from '../support/server';
 import { artifactPath, launchChromium } from '../support/browser';
 import { readRecipeFiles } from '../../src/lib/recipes/file-reader';
+import { demoAccount, signInPage } from '../support/session';
 
 const CASCADE = 'htst-product-temperature-cascade';
 
@@ -14,16 +15,25 @@ function pdfPageCount(pdf: Buffer): number {
 describe('recipe pages in Chromium', () => {
   let server: RunningServer;
   let browser: Browser;
+  let context: BrowserContext;
+  /** A page of the signed-in reader's browser context. */
   const open = async (path: string, viewport = { width: 1366, height: 900 }): Promise<Page> => {
-    const page = await browser.newPage({ viewport });
+    const page = await context.newPage();
+    await page.setViewportSize(viewport);
     await page.goto(`${server.url}${path}`);
     return page;
   };
   beforeAll(async () => {
     server = await startServer({ seed: true });
     browser = await launchChromium();
+    context = await browser.newContext();
+    const reader = demoAccount('reader');
+    const first = await context.newPage();
+    await signInPage(first, server.url, reader.email, reader.password);
+    await first.close();
   });
   afterAll(async () => {
+    await context?.close();
     await browser?.close();
     await server?.stop();
   });
