@@ -30,7 +30,7 @@ const StateSchema = z.object({
   blocks: z.array(BlockSchema).max(12),
   sensor: BlockSchema.nullable(),
   /** Horizon in s; null = chosen by the engine. */
-  tFinal: z.number().finite().positive().nullable(),
+  tFinal: z.number().positive().nullable(),
 });
 type State = z.infer<typeof StateSchema>;
 

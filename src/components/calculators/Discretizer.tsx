@@ -28,7 +28,7 @@ export interface DiscretizerProps {
 }
 
 const StateSchema = z.object({
-  ts: z.number().finite().positive(),
+  ts: z.number().positive(),
   method: z.enum(['zoh', 'tustin']),
   pidMethod: z.enum(['backward-euler', 'tustin']),
   pidForm: z.enum(['positional', 'velocity']),

@@ -40,7 +40,7 @@ const StateSchema = z.object({
   model: ProcessModelSchema,
   controller: PidControllerSchema,
   /** Horizon in s; null = the one chosen from the recipe's own numbers. */
-  tFinal: z.number().finite().positive().nullable(),
+  tFinal: z.number().positive().nullable(),
 });
 type State = z.infer<typeof StateSchema>;
 

@@ -1,9 +1,9 @@
 import { z } from 'zod';
 
 /** A finite number (the URL and MDX props can carry anything). */
-const Finite = z.number().finite();
+const Finite = z.number();
 /** A time constant in s, > 0. */
-const TimeConstant = z.number().finite().positive('A time constant must be above 0 s.');
+const TimeConstant = z.number().positive('A time constant must be above 0 s.');
 /** An optional name shown on the block, e.g. "Steam valve" or "RTD TT-210". */
 const Label = z.string().trim().max(40, 'Keep a block label under 40 characters.').optional();
 
@@ -32,9 +32,9 @@ export const SecondOrderBlockSchema = z.object({
   /** Steady-state gain, plain ratio. */
   k: Finite,
   /** Natural frequency ωn, rad/s, > 0. */
-  wn: z.number().finite().positive('The natural frequency must be above 0 rad/s.'),
+  wn: z.number().positive('The natural frequency must be above 0 rad/s.'),
   /** Damping ratio ζ, ≥ 0 (below 1 oscillates). */
-  zeta: z.number().finite().min(0, 'The damping ratio cannot be negative.'),
+  zeta: z.number().min(0, 'The damping ratio cannot be negative.'),
 });
 
 /** e^(−θs): transport delay (a pipe run, a conveyor, an analyser's sample line). */
@@ -42,7 +42,7 @@ export const DeadTimeBlockSchema = z.object({
   kind: z.literal('dead-time'),
   label: Label,
   /** Dead time θ, s, ≥ 0. */
-  theta: z.number().finite().min(0, 'Dead time cannot be negative.'),
+  theta: z.number().min(0, 'Dead time cannot be negative.'),
 });
 
 /** k/s: an integrating process (a tank level), k the slope gain in 1/s. */
@@ -60,7 +60,7 @@ export const LeadLagBlockSchema = z.object({
   /** Steady-state gain, plain ratio. */
   k: Finite,
   /** Lead time, s, ≥ 0 (a negative lead would be a right-half-plane zero: use a custom block). */
-  tLead: z.number().finite().min(0, 'The lead time cannot be negative.'),
+  tLead: z.number().min(0, 'The lead time cannot be negative.'),
   /** Lag time, s, > 0. */
   tLag: TimeConstant,
 });
