@@ -60,6 +60,13 @@ function readout(value: number | null, unit?: string): string {
   return unit ? `${text} ${unit}` : text;
 }
 
+const legends = new WeakMap<uPlot, { label: string; color: string }[]>();
+
+/** The lines of a chart drawn by this component, with their resolved colours (for PNG export). */
+export function chartLegend(u: uPlot): { label: string; color: string }[] {
+  return legends.get(u) ?? [];
+}
+
 /** A uPlot range function: the data's extent padded 5 %, but never beyond the given bounds. */
 function limit(range: AxisRange): uPlot.Range.Function {
   return (_u, dataMin, dataMax) => {
@@ -94,7 +101,8 @@ function drawMarkers(u: uPlot, markers: readonly ChartMarker[], palette: Record<
       ctx.moveTo(bbox.left, y);
       ctx.lineTo(bbox.left + bbox.width, y);
       ctx.stroke();
-      ctx.fillText(m.label, bbox.left + 4 * devicePixelRatio, y - 4 * devicePixelRatio);
+      const width = ctx.measureText(m.label).width;
+      ctx.fillText(m.label, bbox.left + bbox.width - width - 4 * devicePixelRatio, y - 4 * devicePixelRatio);
     }
   }
   ctx.restore();
@@ -160,6 +168,7 @@ export default function Chart(props: ChartProps) {
         hooks: { draw: [(u) => drawMarkers(u, markerRef.current, palette)] },
       };
       chart.current = new uPlot(opts, dataRef.current as uPlot.AlignedData, el);
+      legends.set(chart.current, series.map((s) => ({ label: s.label, color: palette[s.color] })));
       onChart?.(chart.current);
     };
     create();

@@ -75,7 +75,8 @@ export default function LoopResponse(props: LoopResponseProps) {
   const setpointData = useMemo<uPlot.AlignedData>(() => {
     if (!computed.ok) return [[], [], []];
     const { t, y } = computed.result.setpoint;
-    return [t, y, t.map(() => 1)];
+    // The setpoint goes first so the response is drawn over it.
+    return [t, t.map(() => 1), y];
   }, [computed]);
   const loadData = useMemo<uPlot.AlignedData>(() => (computed.ok ? [computed.result.load.t, computed.result.load.y] : [[], []]), [computed]);
   const checks = useMemo(() => (computed.ok ? checkClaims(claims, computed.result.figures) : []), [computed, claims]);
@@ -143,8 +144,8 @@ export default function LoopResponse(props: LoopResponseProps) {
             xLabel="t (s)"
             yLabel="PV per unit setpoint"
             series={[
-              { label: 'PV', color: 'copper' },
               { label: 'Setpoint', color: 'muted', dash: [5, 4], width: 1 },
+              { label: 'PV', color: 'copper' },
             ]}
             data={setpointData}
             height={220}

@@ -1,4 +1,5 @@
 import type uPlot from 'uplot';
+import { chartLegend } from './Chart';
 
 /** Hands a file to the browser's download, named as given. */
 export function downloadBlob(blob: Blob, fileName: string): void {
@@ -39,16 +40,13 @@ export async function chartsToPng(charts: ReadonlyArray<{ title: string; chart: 
     ctx.fillText(title, pad, y + 14 * ratio);
     let x = pad;
     ctx.font = `${11 * ratio}px "IBM Plex Mono", monospace`;
-    chart.series.forEach((s, i) => {
-      if (i === 0 && (chart as unknown as { mode?: number }).mode !== 2) return;
-      if (!s.label || typeof s.stroke !== 'string') return;
-      ctx.fillStyle = s.stroke;
+    for (const { label, color } of chartLegend(chart)) {
+      ctx.fillStyle = color;
       ctx.fillRect(x, y + 24 * ratio, 14 * ratio, 4 * ratio);
       ctx.fillStyle = ink;
-      const label = String(s.label);
       ctx.fillText(label, x + 18 * ratio, y + 30 * ratio);
-      x += (26 + 7 * label.length) * ratio;
-    });
+      x += ctx.measureText(label).width + 30 * ratio;
+    }
     y += head;
     ctx.drawImage(chart.ctx.canvas, pad, y);
     y += chart.ctx.canvas.height + pad;
