@@ -127,7 +127,7 @@ export default function BlockChain({ blocks, sensor, id = 'block-chain', title =
         </div>
         <div className="calc-charts">
           {computed.ok ? (
-            <div className="calc-math" style={{ minHeight: computed.sensor ? '9rem' : '4rem' }} data-testid={`${id}-tf`} data-tf={JSON.stringify(computed.combined)}>
+            <div className="calc-math" style={{ minHeight: computed.sensor ? '12rem' : '5rem' }} data-testid={`${id}-tf`} data-tf={JSON.stringify(computed.combined)}>
               {html ? <div dangerouslySetInnerHTML={{ __html: html }} /> : plain.map((line) => <p key={line} className="calc-code">{line}</p>)}
             </div>
           ) : (

@@ -206,7 +206,7 @@ export default function Chart(props: ChartProps) {
 
   return (
     <figure className="calc-chart" data-testid={testId} aria-label={title} role="group">
-      <div ref={box} style={{ minHeight: height + 40 }} className="calc-chart-plot" />
+      <div ref={box} style={{ minHeight: height + 40 + 24 * Math.floor(series.length / 4) }} className="calc-chart-plot" />
       <figcaption className="sr-only">{title}</figcaption>
     </figure>
   );
