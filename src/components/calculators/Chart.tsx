@@ -2,6 +2,7 @@ import { useEffect, useLayoutEffect, useRef } from 'react';
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 import { resolvePalette, type ChartColor } from './chart-colors';
+import { setChartLegend } from './chart-legend';
 
 /** One plotted line. */
 export interface ChartSeries {
@@ -58,13 +59,6 @@ function readout(value: number | null, unit?: string): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
   const text = String(Number(value.toPrecision(4)));
   return unit ? `${text} ${unit}` : text;
-}
-
-const legends = new WeakMap<uPlot, { label: string; color: string }[]>();
-
-/** The lines of a chart drawn by this component, with their resolved colours (for PNG export). */
-export function chartLegend(u: uPlot): { label: string; color: string }[] {
-  return legends.get(u) ?? [];
 }
 
 /** A uPlot range function: the data's extent padded 5 %, but never beyond the given bounds. */
@@ -168,7 +162,7 @@ export default function Chart(props: ChartProps) {
         hooks: { draw: [(u) => drawMarkers(u, markerRef.current, palette)] },
       };
       chart.current = new uPlot(opts, dataRef.current as uPlot.AlignedData, el);
-      legends.set(chart.current, series.map((s) => ({ label: s.label, color: palette[s.color] })));
+      setChartLegend(chart.current, series.map((s) => ({ label: s.label, color: palette[s.color] })));
       onChart?.(chart.current);
     };
     create();

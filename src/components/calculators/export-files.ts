@@ -1,5 +1,5 @@
 import type uPlot from 'uplot';
-import { chartLegend } from './Chart';
+import { chartLegend } from './chart-legend';
 
 /** Hands a file to the browser's download, named as given. */
 export function downloadBlob(blob: Blob, fileName: string): void {
