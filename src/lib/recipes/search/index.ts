@@ -40,9 +40,26 @@ const SEARCHABLE = new Set<RecipeStatus>(['published', 'retired']);
 /** Field boosts: a word in the title or a loop tag says more than one in the body. */
 const BOOST = { title: 4, loopTags: 3, tags: 2, summary: 1.5, body: 1 };
 
-/** Typos are forgiven in words of five letters or more; short words and tag parts must match. */
+/** Typos are forgiven in words of five letters or more; short words and loop tags must match. */
 function fuzziness(term: string): number | false {
-  return term.length >= 5 ? 0.2 : false;
+  return term.length >= 5 && !/\d/.test(term) ? 0.2 : false;
+}
+
+/** An ISA-5.1 loop tag such as TIC-210 or FIC-101A: kept as one word. */
+const LOOP_TAG = /^[a-z]{2,5}-?\d{2,5}[a-z]?$/i;
+const SPACE_OR_PUNCTUATION = /[\n\r\p{Z}\p{P}]+/u;
+
+/**
+ * Words as MiniSearch's default splits them, except loop tags, which stay whole in documents and
+ * queries alike ("TIC-210" is one word, also found as "tic210"), so "TIC" never finds "FIC-101"
+ * and a tag query does not match every recipe that mentions any TIC.
+ */
+export function tokenize(text: string): string[] {
+  return text.split(/\s+/).flatMap((chunk) => {
+    const bare = chunk.replace(/^[^\p{L}\p{N}]+|[^\p{L}\p{N}]+$/gu, '');
+    if (LOOP_TAG.test(bare)) return bare.includes('-') ? [bare, bare.replace('-', '')] : [bare];
+    return chunk.split(SPACE_OR_PUNCTUATION).filter(Boolean);
+  });
 }
 
 function toDocument(r: RecipeRecord): SearchDocument {
@@ -52,8 +69,7 @@ function toDocument(r: RecipeRecord): SearchDocument {
     title: d.title,
     summary: d.summary,
     tags: d.tags.join(' '),
-    // "FIC-101" is found as "FIC-101", "fic 101" and "fic101".
-    loopTags: [...d.loopTags, ...d.loopTags.map((t) => t.replace('-', '')), ...(d.innerLoop ? [d.innerLoop.loopTag] : [])].join(' '),
+    loopTags: [...d.loopTags, ...(d.innerLoop ? [d.innerLoop.loopTag] : [])].join(' '),
     body: plainText(r.body),
     status: d.status,
     loopType: d.loopType,
@@ -65,6 +81,7 @@ export function createSearchIndex(records: RecipeRecord[] = []) {
   const mini = new MiniSearch<SearchDocument>({
     fields: ['title', 'summary', 'tags', 'loopTags', 'body'],
     storeFields: ['title', 'summary', 'body', 'status', 'loopType'],
+    tokenize,
     searchOptions: { boost: BOOST, prefix: true, fuzzy: fuzziness },
   });
 

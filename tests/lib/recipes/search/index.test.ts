@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createSearchIndex } from '../../../../src/lib/recipes/search/index';
+import { createSearchIndex, tokenize } from '../../../../src/lib/recipes/search/index';
 import { makeRecord } from '../make-record';
 
 const records = [
@@ -20,10 +20,12 @@ describe('createSearchIndex', () => {
     expect(createSearchIndex(records).search('averag')[0]?.slug).toBe('silo-level');
   });
 
-  it('finds a recipe by its ISA-5.1 loop tag, written with or without the hyphen', () => {
+  it('finds a recipe by its ISA-5.1 loop tag, written with or without the hyphen, and only by its own tag', () => {
     const index = createSearchIndex(records);
-    expect(index.search('TIC-210')[0]?.slug).toBe('pasteurizer-cascade');
-    expect(index.search('tic210')[0]?.slug).toBe('pasteurizer-cascade');
+    expect(index.search('TIC-210').map((h) => h.slug)).toEqual(['pasteurizer-cascade']);
+    expect(index.search('tic210').map((h) => h.slug)).toEqual(['pasteurizer-cascade']);
+    expect(index.search('TIC-211')).toEqual([]);
+    expect(index.search('LIC-12').map((h) => h.slug)).toEqual(['silo-level']);
   });
 
   it('ranks a title match above a match in the body only (field boosts)', () => {
@@ -61,5 +63,11 @@ describe('createSearchIndex', () => {
 
   it('answers an empty query with no hits', () => {
     expect(createSearchIndex(records).search('   ')).toEqual([]);
+  });
+});
+
+describe('tokenize', () => {
+  it('keeps loop tags whole (with and without the hyphen) and splits other words at punctuation', () => {
+    expect(tokenize('Use TIC-210, then hot-water (FIC-101A).')).toEqual(['Use', 'TIC-210', 'TIC210', 'then', 'hot', 'water', 'FIC-101A', 'FIC101A']);
   });
 });
