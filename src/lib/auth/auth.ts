@@ -28,7 +28,12 @@ export function createAuth(knex: Knex, env: NodeJS.ProcessEnv = process.env) {
     baseURL: settings.baseURL,
     basePath: '/api/auth',
     secret: settings.secret,
-    trustedOrigins: settings.trustedOrigins,
+    // Demo mode also trusts the origin the request was addressed to, so `astro dev --port N`
+    // works; a cross-site form still fails because its Origin differs from the Host it posts to.
+    trustedOrigins:
+      settings.mode === 'production'
+        ? settings.trustedOrigins
+        : (request) => [...settings.trustedOrigins, request ? new URL(request.url).origin : null],
     database: knexAdapter(knex),
     emailAndPassword: {
       enabled: true,
