@@ -11,7 +11,8 @@ import { margins } from './margins';
 import { closedLoopStable, characteristicPolynomial, openPathStable } from './stability';
 import { sortRoots, roots } from './roots';
 import { stepResponse } from './simulate';
-import { closedLoopStep, type LoopInput } from './closed-loop';
+import { closedLoopStep, closedLoopTransferFunction, type LoopInput } from './closed-loop';
+import { degree } from './polynomial';
 import { stepInfo } from './step-info';
 import { timeGrid } from './time-grid';
 import { horizonFromRoots, padeClosedLoopRoots } from './horizon';
@@ -60,7 +61,23 @@ function setup(req: AnalyzeRequest): Setup {
   }
   const plant = chain(plantBlocks);
   const loopBlocks = [...(controller ? [controller] : []), ...plantBlocks, sensor];
+  if (controller) checkProperLoop(controller, plant, sensor);
   return { plant, plantBlocks, sensor, controller, loopBlocks, loop: factor(loopBlocks) };
+}
+
+/**
+ * An improper controller is accepted where the closed loop is proper: without dead time when
+ * C·G/(1 + L) and G/(1 + L) are proper; with dead time in the loop only when C·G is proper
+ * (otherwise the loop is of neutral type, with infinitely many unstable roots).
+ */
+function checkProperLoop(c: TransferFunction, g: TransferFunction, h: TransferFunction): void {
+  const lRelDeg = degree(c.den) + degree(g.den) + degree(h.den) - degree(c.num) - degree(g.num) - degree(h.num);
+  if (lRelDeg >= 0 || degree(g.num) === -Infinity) return;
+  if (g.delay + h.delay > 0) {
+    throw new ModelError('With dead time in the loop, an unfiltered derivative on this plant gives an improper loop; add a derivative filter (tf > 0 or n).', 'invalid_model', 'controller');
+  }
+  closedLoopTransferFunction({ controller: c, plant: g, sensor: h }, 'setpoint');
+  closedLoopTransferFunction({ controller: c, plant: g, sensor: h }, 'load');
 }
 
 function constantTerm(p: readonly number[]): number {
@@ -108,6 +125,12 @@ function runStep(s: Setup, req: StepRequest, stable: boolean): NonNullable<Analy
   let tFinal = req.tFinal ?? estimatedHorizon(s, input);
   let t = timeGrid(tFinal, req.points);
   let y = simulateStep(s, t, input);
+  // An automatic horizon for a growing response is shortened until the numbers stay finite.
+  for (let i = 0; i < 20 && req.tFinal === undefined && y.some((v) => !Number.isFinite(v)); i++) {
+    tFinal /= 4;
+    t = timeGrid(tFinal, req.points);
+    y = simulateStep(s, t, input);
+  }
   if (req.tFinal === undefined && finalValue !== null) {
     for (let i = 0; i < 6 && !hasSettled(y, finalValue); i++) {
       tFinal *= 2;

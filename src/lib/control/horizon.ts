@@ -25,6 +25,9 @@ export function horizonFromRoots(list: readonly Complex[], delay: number, scales
   } else {
     const nonZero = scales.filter((s) => s > 0);
     t = delay + (nonZero.length ? 10 / Math.min(...nonZero) : 10 * Math.max(delay, 1));
+    // Growing modes: show about e^6 of growth, not an overflow.
+    const growth = Math.max(0, ...list.map((r) => r.re));
+    if (growth > 0) t = Math.min(t, delay + 6 / growth);
   }
   return Math.min(Math.max(t, 1e-9), 1e9);
 }

@@ -140,3 +140,22 @@ describe('analyze', () => {
     }
   });
 });
+
+describe('analyze (growing and improper loops)', () => {
+  it('chooses a horizon that shows a fast-growing unstable response without overflowing', () => {
+    const r = analyze({ plant: { num: [1], den: [100, 1] }, controller: { form: 'ideal', kc: -500 }, analyses: { step: true, poles: true } });
+    expect(r.stable).toBe(false);
+    expect(r.step!.y.every(Number.isFinite)).toBe(true);
+    expect(Math.abs(r.step!.y[r.step!.y.length - 1])).toBeGreaterThan(10);
+  });
+
+  it('refuses an improper loop with dead time even when no step is asked for', () => {
+    expect(() => analyze({ plant: { num: [2], den: [1], delay: 1 }, controller: { form: 'parallel', kp: 1, kd: 1 }, analyses: { margins: true } })).toThrow(expect.objectContaining({ code: 'invalid_model', field: 'controller' }));
+  });
+
+  it('accepts an unfiltered derivative on a biproper plant without dead time when the closed loop is proper', () => {
+    const r = analyze({ plant: { num: [1, 2], den: [1, 1] }, controller: { form: 'parallel', kp: 1, ki: 1, kd: 0.5 }, analyses: { step: { tFinal: 10 }, poles: true } });
+    expect(r.stable).toBe(true);
+    expect(r.step!.info.finalValue).toBeCloseTo(1, 12);
+  });
+});
