@@ -43,30 +43,41 @@ function referenceLoopMs(): number {
   return s > 0 ? ms : ms;
 }
 
-function timeOne(req: AnalyzeRequest, rounds: number): { medianUs: number; cpuUs: number; perSecond: number } {
+/**
+ * Median over all rounds, and the best median of batches of 100: on a shared machine the best
+ * batch is the closest figure to an idle core (both are printed).
+ */
+function timeOne(req: AnalyzeRequest, rounds: number): { medianUs: number; bestBatchUs: number; cpuUs: number; perSecond: number } {
   for (let i = 0; i < 200; i++) analyze(req);
   const samples: number[] = [];
+  const batches: number[] = [];
   const c0 = process.cpuUsage();
   const start = performance.now();
   for (let i = 0; i < rounds; i++) {
     const t0 = performance.now();
     analyze(req);
     samples.push(performance.now() - t0);
+    if (samples.length % 100 === 0) batches.push(median(samples.slice(-100)));
   }
   const elapsed = (performance.now() - start) / 1000;
   const cpu = process.cpuUsage(c0);
-  return { medianUs: median(samples) * 1000, cpuUs: (cpu.user + cpu.system) / rounds, perSecond: Math.round(rounds / elapsed) };
+  return {
+    medianUs: median(samples) * 1000,
+    bestBatchUs: Math.min(...batches) * 1000,
+    cpuUs: (cpu.user + cpu.system) / rounds,
+    perSecond: Math.round(rounds / elapsed),
+  };
 }
 
 export async function run(): Promise<void> {
-  const full = timeOne(benchRequest, 2000);
+  const full = timeOne(benchRequest, 3000);
   const parts = (['step', 'frequency', 'margins'] as const).map((k) => {
     const analyses = { [k]: benchRequest.analyses![k] };
     return `${k} ${timeOne({ ...benchRequest, analyses }, 500).medianUs.toFixed(0)} µs`;
   });
   const size = await bundleGzipBytes();
   console.log('engine: full analysis (4th-order plant + dead time, filtered ideal PID, 1001-point step, 200-point frequency response, margins, Ms)');
-  console.log(`engine: median ${full.medianUs.toFixed(1)} µs per analysis (target ≤ 200 µs), ${full.perSecond} analyses/s on one core, ${full.cpuUs.toFixed(1)} µs CPU per analysis`);
+  console.log(`engine: median ${full.medianUs.toFixed(1)} µs per analysis (target ≤ 200 µs; best batch of 100: ${full.bestBatchUs.toFixed(1)} µs), ${full.perSecond} analyses/s on one core, ${full.cpuUs.toFixed(1)} µs CPU per analysis`);
   console.log(`engine: parts alone (medians, each with validation and factoring): ${parts.join(', ')}`);
   console.log(`engine: context: load average ${loadavg()[0].toFixed(1)}, reference loop of 10⁷ dependent additions ${referenceLoopMs().toFixed(0)} ms (about 10–15 ms on an idle core)`);
   console.log(`engine: client bundle of src/lib/control/index.ts: ${(size.raw / 1024).toFixed(1)} KiB minified, ${(size.gzip / 1024).toFixed(1)} KiB gzip`);

@@ -9,7 +9,7 @@
  */
 import type { Margins } from './types';
 import { type FactoredModel, magnitudeAt, phaseAt, pointAt } from './frequency';
-import { bisectLog, maximizeLog, scanGrid } from './scan-grid';
+import { bisectLog, loopScan, maximizeLog } from './scan-grid';
 
 const DEG = Math.PI / 180;
 
@@ -45,20 +45,21 @@ function lowFrequencyGain(m: FactoredModel): number {
 
 export function margins(m: FactoredModel, options: MarginOptions = {}): Margins {
   const maxPhase = options.maxPhaseCrossovers ?? 6;
-  const w = scanGrid(m);
+  const scan = loopScan(m);
+  const w = scan.w;
   const n = w.length;
   const logMag = new Float64Array(n);
   const phase = new Float64Array(n);
   const sens = new Float64Array(n);
   const comp = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const p = pointAt(m, w[i]);
-    logMag[i] = Math.log(p.mag);
-    phase[i] = p.phaseDeg;
-    const ph = p.phaseDeg * DEG;
-    const d = Math.hypot(1 + p.mag * Math.cos(ph), p.mag * Math.sin(ph));
+    const mag = scan.mag[i];
+    logMag[i] = Math.log(mag);
+    phase[i] = scan.phaseDeg[i];
+    const ph = phase[i] * DEG;
+    const d = Math.hypot(1 + mag * Math.cos(ph), mag * Math.sin(ph));
     sens[i] = 1 / d;
-    comp[i] = p.mag / d;
+    comp[i] = mag / d;
   }
   const logMagAt = (x: number) => Math.log(magnitudeAt(m, x));
   const gainCrossovers: number[] = [];

@@ -5,7 +5,7 @@
  * function, so results do not depend on this grid.
  */
 import type { FactoredModel } from './frequency';
-import { magnitudeAt, timeScales } from './frequency';
+import { magnitudeAt, pointAt, timeScales } from './frequency';
 
 const PER_DECADE = 16;
 
@@ -34,6 +34,31 @@ export function scanGrid(m: FactoredModel): number[] {
     }
   }
   return w.filter((x) => x >= lo && x <= hi).sort((p, q) => p - q);
+}
+
+/** L(jw) on the scan grid, computed once per model and shared by margins and stability. */
+export interface LoopScan {
+  w: number[];
+  mag: Float64Array;
+  phaseDeg: Float64Array;
+}
+
+const scans = new WeakMap<FactoredModel, LoopScan>();
+
+export function loopScan(m: FactoredModel): LoopScan {
+  const cached = scans.get(m);
+  if (cached) return cached;
+  const w = scanGrid(m);
+  const mag = new Float64Array(w.length);
+  const phaseDeg = new Float64Array(w.length);
+  for (let i = 0; i < w.length; i++) {
+    const p = pointAt(m, w[i]);
+    mag[i] = p.mag;
+    phaseDeg[i] = p.phaseDeg;
+  }
+  const scan = { w, mag, phaseDeg };
+  scans.set(m, scan);
+  return scan;
 }
 
 /**

@@ -8,6 +8,7 @@ import type { Complex, TransferFunction } from './types';
 import { type FactoredModel, magnitudeAt, phaseAt, timeScales } from './frequency';
 import { add, product } from './polynomial';
 import { roots } from './roots';
+import { loopScan, type LoopScan } from './scan-grid';
 
 /** A root with its damping ratio ζ = −re/|p| and natural frequency ωn = |p| (rad/s). */
 export interface RootInfo extends Complex {
@@ -66,10 +67,16 @@ export function nyquistUnstableCount(m: FactoredModel): number {
   const bounds = [eps, ...cuts.flatMap((c) => [c * (1 - 1e-7), c * (1 + 1e-7)]), wEnd];
   let delta = 0;
   let closest = Infinity;
-  for (let k = 0; k + 1 < bounds.length; k += 2) {
-    const seg = trackArgument(m, bounds[k], bounds[k + 1]);
-    delta += seg.delta;
-    closest = Math.min(closest, seg.closest);
+  if (cuts.length === 0) {
+    const seg = trackArgument(m, eps, wEnd, loopScan(m));
+    delta = seg.delta;
+    closest = seg.closest;
+  } else {
+    for (let k = 0; k + 1 < bounds.length; k += 2) {
+      const seg = trackArgument(m, bounds[k], bounds[k + 1], null);
+      delta += seg.delta;
+      closest = Math.min(closest, seg.closest);
+    }
   }
   const end = onePlusL(m, wEnd);
   // Beyond wEnd, |L| < 1 stays inside a disc around 1: no more encirclements.
@@ -99,8 +106,11 @@ function endFrequency(m: FactoredModel, scales: number[]): number {
   return w;
 }
 
-/** Continuous change of arg(1 + L(jw)) from a to b, refined until each step turns less than 30°. */
-function trackArgument(m: FactoredModel, a: number, b: number): { delta: number; closest: number } {
+/**
+ * Continuous change of arg(1 + L(jw)) from a to b, refined until each step turns less than 30°.
+ * Starts from the shared scan values where they lie inside [a, b].
+ */
+function trackArgument(m: FactoredModel, a: number, b: number, scan: LoopScan | null): { delta: number; closest: number } {
   const decades = Math.log10(b / a);
   const n = Math.max(2, Math.ceil(decades * 10));
   let prevW = a;
@@ -108,8 +118,8 @@ function trackArgument(m: FactoredModel, a: number, b: number): { delta: number;
   let delta = 0;
   let closest = Math.hypot(prev.re, prev.im);
   const maxTurn = Math.PI / 6;
-  const stepTo = (w1: number, depth: number): void => {
-    const next = onePlusL(m, w1);
+  const stepTo = (w1: number, depth: number, known?: Complex): void => {
+    const next = known ?? onePlusL(m, w1);
     let turn = Math.atan2(prev.re * next.im - prev.im * next.re, prev.re * next.re + prev.im * next.im);
     // The dead time alone turns L by w·θ: never step further than a fraction of a turn of it.
     const delayTurn = (w1 - prevW) * m.delay;
@@ -124,6 +134,17 @@ function trackArgument(m: FactoredModel, a: number, b: number): { delta: number;
     prev = next;
     prevW = w1;
   };
+  if (scan) {
+    for (let i = 0; i < scan.w.length; i++) {
+      const w = scan.w[i];
+      if (w <= a || w >= b) continue;
+      const ph = (scan.phaseDeg[i] * Math.PI) / 180;
+      stepTo(w, 0, { re: 1 + scan.mag[i] * Math.cos(ph), im: scan.mag[i] * Math.sin(ph) });
+    }
+    for (let w = prevW * 1.26; w < b; w *= 1.26) stepTo(w, 0);
+    stepTo(b, 0);
+    return { delta, closest };
+  }
   for (let i = 1; i < n; i++) stepTo(a * (b / a) ** (i / (n - 1)), 0);
   return { delta, closest };
 }
