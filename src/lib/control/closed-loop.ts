@@ -2,15 +2,17 @@
  * Closed-loop time responses of r → e = r − ym → C → (+ d) → G → y → H → ym with the dead
  * times of G and H taken exactly. Without dead time in the loop the closed loop is rational and
  * simulated exactly. With dead time θ = θG + θH the loop is cut at the delay: the rational part
- * (C·G_R, then H_R) is advanced exactly over each fixed step for an error signal that is linear
- * within the step (first-order hold); the step divides θ so the delayed measurement is a stored
- * sample; when θ is shorter than a step the one unknown sample is solved for. The output, delayed
- * by θG, is read between stored samples by cubic Hermite interpolation (dz/dt is known exactly).
- * The dead time is never replaced by a rational approximation.
+ * (C·G_R, then H_R) is one state-space system, advanced exactly over each fixed step for an error
+ * signal that is the cubic Hermite interpolant of the delayed measurement and its rate (both
+ * stored at every node; the step divides θ, so delayed samples are stored ones). The scheme is
+ * fourth order in the step. When θ is shorter than a step, the error is taken linear within the
+ * step and its one unknown end value is solved for (second order). The output, delayed by θG,
+ * is read between nodes by cubic Hermite interpolation (dz/dt is known exactly). The dead time
+ * is never replaced by a rational approximation.
  */
 import { ModelError, type TransferFunction } from './types';
 import { add, degree, multiply } from './polynomial';
-import { cascade, discretizeStates as discretize, toStateSpace } from './state-space';
+import { cascade, discretizeCubic, discretizeStates as discretize, toStateSpace } from './state-space';
 import { impulseResponse, stepResponse, type TimeResponse } from './simulate';
 import { roots } from './roots';
 import { gridStep, timeGrid } from './time-grid';
@@ -25,12 +27,12 @@ export interface Loop {
 export type LoopInput = 'setpoint' | 'load';
 
 /**
- * Options for the fixed-step simulation. The step is at most tFinal/minSteps and at most half
- * the fastest time constant of the loop's blocks (but no more than maxSteps steps in all), and
- * it divides the loop dead time exactly so that delayed samples fall on stored ones.
+ * Options for the fixed-step simulation. The step is at most tFinal/minSteps and at most the
+ * fastest time constant of the loop's blocks (but no more than maxSteps steps in all), and it
+ * divides the loop dead time exactly so that delayed samples fall on stored ones.
  */
 export interface ClosedLoopOptions {
-  /** Least number of internal steps over the horizon; default 1000. */
+  /** Least number of internal steps over the horizon; default 250. */
   minSteps?: number;
   /** Most internal steps over the horizon; default 200 000. */
   maxSteps?: number;
@@ -38,8 +40,8 @@ export interface ClosedLoopOptions {
 
 /** Internal step: see ClosedLoopOptions. */
 function internalStep(span: number, theta: number, fastest: number, options: ClosedLoopOptions): number {
-  let h = span / (options.minSteps ?? 1000);
-  if (fastest > 0) h = Math.min(h, 0.5 / fastest);
+  let h = span / (options.minSteps ?? 250);
+  if (fastest > 0) h = Math.min(h, 1 / fastest);
   h = Math.max(h, span / (options.maxSteps ?? 200000));
   if (theta >= h) h = theta / Math.ceil(theta / h - 1e-9);
   return h;
@@ -77,72 +79,93 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
   const h = internalStep(span, theta, Math.max(fastestRate(p), fastestRate(hR)), options);
   const steps = Math.ceil(span / h - 1e-9);
   const ss = cascade(toStateSpace(p), toStateSpace(hR));
-  const { phi, g0, g1 } = discretize(ss, h);
   const n = ss.n;
   const [cz, cm] = ss.c;
   const [dz, dm] = ss.d;
-  // Known forcing by the load step: z2 = G_R·d and m2 = H_R·G_R·d, exact on the internal grid.
-  const inner = input === 'load' ? timeGrid(steps * h, steps + 1) : [];
-  const z2 = input === 'load' ? stepResponse(gR, inner).y : null;
-  const z2Rate = input === 'load' ? impulseResponse(gR, inner).y : null;
-  const m2 = input === 'load' ? stepResponse({ num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 }, inner).y : null;
+  // Known forcing by the load step: z2 = G_R·d and m2 = H_R·G_R·d (and their rates), exact on the grid.
+  const load = input === 'load';
+  const inner = load ? timeGrid(steps * h, steps + 1) : [];
+  const hg = { num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 };
+  const zero = new Float64Array(steps + 1);
+  const zF = load ? stepResponse(gR, inner).y : zero;
+  const zRateF = load ? impulseResponse(gR, inner).y : zero;
+  const mF = load ? stepResponse(hg, inner).y : zero;
+  const mRateF = load ? impulseResponse(hg, inner).y : zero;
   const r = input === 'setpoint' ? 1 : 0;
   const zHist = new Float64Array(steps + 1);
-  // dz/dt at each node, for cubic Hermite interpolation of the output between nodes.
-  const zRate = new Float64Array(steps + 1);
-  const czA = new Float64Array(n);
-  let czB = 0;
-  for (let k = 0; k < n; k++) {
-    czB += cz[k] * ss.b[k];
-    for (let j = 0; j < n; j++) czA[j] += cz[k] * ss.a[k * n + j];
-  }
   const mHist = new Float64Array(steps + 1);
+  // Rates at each node: dz/dt for the Hermite output, dm/dt for the cubic hold of the error.
+  const zRate = new Float64Array(steps + 1);
+  const mRate = new Float64Array(steps + 1);
+  const rowTimesA = (c: Float64Array): { ca: Float64Array; cb: number } => {
+    const ca = new Float64Array(n);
+    let cb = 0;
+    for (let k = 0; k < n; k++) {
+      cb += c[k] * ss.b[k];
+      for (let j = 0; j < n; j++) ca[j] += c[k] * ss.a[k * n + j];
+    }
+    return { ca, cb };
+  };
+  const { ca: czA, cb: czB } = rowTimesA(cz);
+  const { ca: cmA, cb: cmB } = rowTimesA(cm);
   let x: Float64Array = new Float64Array(n);
   let xn: Float64Array = new Float64Array(n);
   const pred = new Float64Array(n);
-  let cmg1 = dm;
-  for (let k = 0; k < n; k++) cmg1 += cm[k] * g1[k];
   // The step divides θ when θ ≥ h, so the delayed measurement is the stored sample `lag` back.
   const lag = theta >= h ? Math.round(theta / h) : 0;
-  const zero = new Float64Array(steps + 1);
-  const zF = z2 ?? zero, zRateF = z2Rate ?? zero, mF = m2 ?? zero;
+  const cubic = lag > 0 ? discretizeCubic(ss, h) : null;
+  const foh = lag > 0 ? null : discretize(ss, h);
+  const phi = cubic ? cubic.phi : foh!.phi;
+  let cmg1 = dm;
+  if (foh) for (let k = 0; k < n; k++) cmg1 += cm[k] * foh.g1[k];
   let e = r;
+  let eRate = 0;
   for (let i = 0; i <= steps; i++) {
-    let zi = dz * e + zF[i];
-    let mi = dm * e + mF[i];
-    let zr = czB * e + zRateF[i];
+    let zi = dz * e + zF[i], mi = dm * e + mF[i];
+    let zr = czB * e + dz * eRate + zRateF[i], mr = cmB * e + dm * eRate + mRateF[i];
     for (let k = 0; k < n; k++) {
       const xk = x[k];
       zi += cz[k] * xk;
       mi += cm[k] * xk;
       zr += czA[k] * xk;
+      mr += cmA[k] * xk;
     }
     zHist[i] = zi;
-    zRate[i] = zr;
     mHist[i] = mi;
+    zRate[i] = zr;
+    mRate[i] = mr;
     if (i === steps) break;
     for (let a = 0; a < n; a++) {
-      let s = g0[a] * e;
       const row = a * n;
+      let s = 0;
       for (let b = 0; b < n; b++) s += phi[row + b] * x[b];
       pred[a] = s;
     }
-    let eNext: number;
-    if (lag > 0) {
+    if (cubic) {
+      // e over the step is the cubic Hermite interpolant of the delayed measurement; before the
+      // delayed start (j ≤ 0 from the left) the measurement is still at rest.
       const j = i + 1 - lag;
-      eNext = j >= 0 ? r - mHist[j] : r;
+      const eEnd = j > 0 ? r - mHist[j] : r;
+      const dEnd = j > 0 ? -mRate[j] * h : 0;
+      const dStart = eRate * h;
+      for (let a = 0; a < n; a++) xn[a] = pred[a] + cubic.ge0[a] * e + cubic.ge1[a] * eEnd + cubic.gd0[a] * dStart + cubic.gd1[a] * dEnd;
+      e = j >= 0 ? r - mHist[j] : r;
+      eRate = j >= 0 ? -mRate[j] : 0;
     } else {
       // θ < h: m at (i+1)h − θ lies inside this step and depends on e(i+1) itself (linear, solved directly).
+      const g = foh!;
       const alpha = 1 - theta / h;
       let beta = mF[i + 1];
+      for (let a = 0; a < n; a++) pred[a] += g.g0[a] * e;
       for (let k = 0; k < n; k++) beta += cm[k] * pred[k];
-      eNext = (r - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
+      const eNext = (r - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
+      for (let a = 0; a < n; a++) xn[a] = pred[a] + g.g1[a] * eNext;
+      eRate = (eNext - e) / h;
+      e = eNext;
     }
-    for (let a = 0; a < n; a++) xn[a] = pred[a] + g1[a] * eNext;
     const swap = x;
     x = xn;
     xn = swap;
-    e = eNext;
   }
   const y = t.map((tk) => {
     const tau = tk - t[0] - loop.plant.delay;

@@ -137,3 +137,41 @@ export function impulseState(ss: StateSpace, h: number): Float64Array {
   }
   return out;
 }
+
+/**
+ * Exact discretization over a step h for an input that is the cubic Hermite interpolant of its
+ * end values e0, e1 and end slopes (times h) d0, d1:
+ * x(k+1) = phi·x(k) + ge0·e0 + ge1·e1 + gd0·d0 + gd1·d1.
+ */
+export interface CubicHold {
+  phi: Float64Array;
+  ge0: Float64Array;
+  ge1: Float64Array;
+  gd0: Float64Array;
+  gd1: Float64Array;
+}
+
+export function discretizeCubic(ss: StateSpace, h: number): CubicHold {
+  const n = ss.n;
+  const m = n + 4;
+  // Augmented states w0..w3 = e and its derivatives in τ = t/h (w3 constant): exact for cubics.
+  const big = new Float64Array(m * m);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) big[i * m + j] = ss.a[i * n + j] * h;
+    big[i * m + n] = ss.b[i] * h;
+  }
+  for (let k = 0; k < 3; k++) big[(n + k) * m + n + k + 1] = 1;
+  const e = expm(big, m);
+  const phi = new Float64Array(n * n);
+  const ge0 = new Float64Array(n), ge1 = new Float64Array(n), gd0 = new Float64Array(n), gd1 = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) phi[i * n + j] = e[i * m + j];
+    // w(0) = (c0, c1, 2c2, 6c3) with c from the Hermite basis.
+    const g0 = e[i * m + n], g1 = e[i * m + n + 1], g2 = 2 * e[i * m + n + 2], g3 = 6 * e[i * m + n + 3];
+    ge0[i] = g0 - 3 * g2 + 2 * g3;
+    ge1[i] = 3 * g2 - 2 * g3;
+    gd0[i] = g1 - 2 * g2 + g3;
+    gd1[i] = -g2 + g3;
+  }
+  return { phi, ge0, ge1, gd0, gd1 };
+}

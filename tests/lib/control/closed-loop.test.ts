@@ -7,25 +7,25 @@ const unity = { num: [1], den: [1], delay: 0 };
 
 describe('closedLoopStep', () => {
   // Source: tests/reference/fixtures/closed-loops.json — method-of-steps DDE integration with
-  // scipy solve_ivp (RK45, rtol 1e-10). Tolerance 5e-5 of the response's largest magnitude (second-order scheme, 1000 steps).
+  // scipy solve_ivp (RK45, rtol 1e-10). Tolerance 1e-5 of the response's largest magnitude (fourth-order scheme, default steps).
   for (const c of fixtures.cases) {
     it(`matches the method-of-steps reference for ${c.name}`, () => {
       const r = closedLoopStep({ controller: c.controller, plant: c.plant, sensor: c.sensor }, c.t, c.input as 'setpoint' | 'load');
       const scale = Math.max(...c.y.map(Math.abs));
       const err = Math.max(...r.y.map((v, i) => Math.abs(v - c.y[i])));
-      expect(err).toBeLessThan(5e-5 * scale);
+      expect(err).toBeLessThan(1e-5 * scale);
     });
   }
 
-  it('converges at second order in the step (grid independence): halving the step quarters the error', () => {
-    const c = fixtures.cases[0];
+  it('converges at fourth order in the step (grid independence): halving the step divides the error by about 16', () => {
+    const c = fixtures.cases[3];
     const loop = { controller: c.controller, plant: c.plant, sensor: c.sensor };
     const err = (minSteps: number) => {
       const r = closedLoopStep(loop, c.t, 'setpoint', { minSteps });
       return Math.max(...r.y.map((v, i) => Math.abs(v - c.y[i])));
     };
-    const e1 = err(2000), e2 = err(4000);
-    expect(e1 / e2).toBeGreaterThan(3);
+    const e1 = err(250), e2 = err(500);
+    expect(e1 / e2).toBeGreaterThan(8);
   });
 
   it('is rational and exact without dead time: P control of 1/(s+1) settles at K/(1+K) (closed form)', () => {
