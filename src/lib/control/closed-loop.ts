@@ -16,6 +16,7 @@ import { cascade, discretizeCubic, discretizeStates as discretize, toStateSpace 
 import { impulseResponse, stepResponse, type TimeResponse } from './simulate';
 import { roots } from './roots';
 import { gridStep, timeGrid } from './time-grid';
+import { cabs } from './roots';
 
 /** The loop's blocks: controller C (may be improper), plant G and sensor H with their dead times. */
 export interface Loop {
@@ -48,7 +49,7 @@ function internalStep(span: number, theta: number, fastest: number, options: Clo
 }
 
 function fastestRate(g: TransferFunction): number {
-  return Math.max(0, ...roots(g.den).map((r) => Math.hypot(r.re, r.im)));
+  return Math.max(0, ...roots(g.den).map((r) => cabs(r.re, r.im)));
 }
 
 /** Rational closed loop Y/R or Y/D of a loop without dead time. */

@@ -9,6 +9,7 @@
  */
 import type { Complex, TransferFunction } from './types';
 import { roots } from './roots';
+import { cabs } from './roots';
 
 const DEG = 180 / Math.PI;
 
@@ -82,7 +83,9 @@ function polyAtJw(p: readonly number[], w: number, out: PolyValue): void {
 
 const scratch: PolyValue = { re: 0, im: 0, quarterTurns: 0 };
 
-/** |G(jw)| and the Horner phase (rad, within a multiple of 2π), block by block. */
+const hornerOut = { mag: 0, arg: 0 };
+
+/** |G(jw)| and the Horner phase (rad, within a multiple of 2π), block by block (into a scratch object). */
 function hornerAt(m: FactoredModel, w: number): { mag: number; arg: number } {
   let logScale = 0, turns = 0, re = 1, im = 0;
   const big = w > 1;
@@ -103,8 +106,9 @@ function hornerAt(m: FactoredModel, w: number): { mag: number; arg: number } {
     if (a > 1e100 || (a < 1e-100 && a > 0)) { re /= a; im /= a; logScale += Math.log(a); }
   }
   // Above w = 1 each polynomial was evaluated as (jw)^n·q(1/(jw)): the powers of w net out here.
-  const mag = Math.hypot(re, im) * (big && turns !== 0 ? Math.pow(w, turns) : 1) * (logScale !== 0 ? Math.exp(logScale) : 1);
-  return { mag, arg: Math.atan2(im, re) + (turns * Math.PI) / 2 };
+  hornerOut.mag = Math.sqrt(re * re + im * im) * (big && turns !== 0 ? Math.pow(w, turns) : 1) * (logScale !== 0 ? Math.exp(logScale) : 1);
+  hornerOut.arg = Math.atan2(im, re) + (turns * Math.PI) / 2;
+  return hornerOut;
 }
 
 /** atan2 to within 0.004 rad — enough to choose a 360° branch (Rajan et al. 2006 polynomial). */
@@ -148,11 +152,23 @@ export function phaseAt(m: FactoredModel, w: number): number {
 
 /** Magnitude and continuous phase together (one evaluation). */
 export function pointAt(m: FactoredModel, w: number): { mag: number; phaseDeg: number } {
+  const p = pointInto(m, w, { mag: 0, phaseDeg: 0 });
+  return p;
+}
+
+/** pointAt writing into `out` (no allocation, for inner loops). */
+export function pointInto(m: FactoredModel, w: number, out: { mag: number; phaseDeg: number }): { mag: number; phaseDeg: number } {
   const branch = rootPhase(m, w, !m.blocks.length);
-  if (!m.blocks.length) return { mag: magnitudeAt(m, w), phaseDeg: (branch - w * m.delay) * DEG };
+  if (!m.blocks.length) {
+    out.mag = magnitudeAt(m, w);
+    out.phaseDeg = (branch - w * m.delay) * DEG;
+    return out;
+  }
   const h = hornerAt(m, w);
   const turns = Math.round((branch - h.arg) / (2 * Math.PI));
-  return { mag: h.mag, phaseDeg: (h.arg + 2 * Math.PI * turns - w * m.delay) * DEG };
+  out.mag = h.mag;
+  out.phaseDeg = (h.arg + 2 * Math.PI * turns - w * m.delay) * DEG;
+  return out;
 }
 
 /** G(jw) as a complex number. */
@@ -173,8 +189,9 @@ export interface FrequencyResponse {
 export function frequencyResponse(m: FactoredModel, w: readonly number[]): FrequencyResponse {
   const mag = new Array<number>(w.length);
   const phaseDeg = new Array<number>(w.length);
+  const p = { mag: 0, phaseDeg: 0 };
   for (let i = 0; i < w.length; i++) {
-    const p = pointAt(m, w[i]);
+    pointInto(m, w[i], p);
     mag[i] = p.mag;
     phaseDeg[i] = p.phaseDeg;
   }
@@ -197,7 +214,7 @@ export function nyquist(m: FactoredModel, w: readonly number[] = autoGrid(m)): {
 export function timeScales(m: FactoredModel): number[] {
   const out: number[] = [];
   for (const r of [...m.zeros, ...m.poles]) {
-    const a = Math.hypot(r.re, r.im);
+    const a = cabs(r.re, r.im);
     if (a > 0) out.push(a);
   }
   if (m.delay > 0) out.push(1 / m.delay);

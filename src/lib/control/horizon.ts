@@ -8,6 +8,7 @@
 import type { Complex, TransferFunction } from './types';
 import { add, multiply, product } from './polynomial';
 import { roots } from './roots';
+import { cabs } from './roots';
 
 const DECAY = 8;
 
@@ -16,7 +17,7 @@ export function horizonFromRoots(list: readonly Complex[], delay: number, scales
   let t: number;
   if (stable) {
     const slowest = Math.min(...list.map((r) => -r.re));
-    const fastest = Math.max(...list.map((r) => Math.hypot(r.re, r.im)));
+    const fastest = Math.max(...list.map((r) => cabs(r.re, r.im)));
     t = delay + DECAY / slowest;
     // Oscillatory modes: show at least a couple of periods of the slowest one.
     const osc = list.filter((r) => r.im !== 0).map((r) => (2 * Math.PI) / Math.abs(r.im));

@@ -28,7 +28,7 @@ function sensitivity(m: FactoredModel, w: number): { s: number; t: number } {
   const mag = p.mag;
   const ph = p.phaseDeg * DEG;
   const re = 1 + mag * Math.cos(ph), im = mag * Math.sin(ph);
-  const d = Math.hypot(re, im);
+  const d = Math.sqrt(re * re + im * im);
   return { s: 1 / d, t: mag / d };
 }
 
@@ -57,7 +57,8 @@ export function margins(m: FactoredModel, options: MarginOptions = {}): Margins 
     logMag[i] = Math.log(mag);
     phase[i] = scan.phaseDeg[i];
     const ph = phase[i] * DEG;
-    const d = Math.hypot(1 + mag * Math.cos(ph), mag * Math.sin(ph));
+    const cr = 1 + mag * Math.cos(ph), ci = mag * Math.sin(ph);
+    const d = Math.sqrt(cr * cr + ci * ci);
     sens[i] = 1 / d;
     comp[i] = mag / d;
   }

@@ -7,6 +7,12 @@ import type { Complex } from './types';
 import { trim, zeroRootCount } from './polynomial';
 
 const EPS = 2.220446049250313e-16;
+
+/** |a + jb| without Math.hypot's variadic overhead; falls back to it only on overflow. */
+export function cabs(a: number, b: number): number {
+  const s = Math.sqrt(a * a + b * b);
+  return s === Infinity || (s === 0 && (a !== 0 || b !== 0)) ? Math.hypot(a, b) : s;
+}
 const MAX_ITERATIONS = 500;
 
 /** All roots of p (descending coefficients), sorted by real part then imaginary part. */
@@ -80,7 +86,7 @@ function newtonRatio(c: number[], z: Complex): { re: number; im: number; small: 
     const d = z.re * z.re + z.im * z.im;
     x = { re: z.re / d, im: -z.im / d };
   }
-  const ax = Math.hypot(x.re, x.im);
+  const ax = cabs(x.re, x.im);
   let pr = 0, pi = 0, dr = 0, di = 0, bound = 0;
   for (let i = 0; i <= n; i++) {
     const coef = big ? c[n - i] : c[i];
@@ -92,7 +98,7 @@ function newtonRatio(c: number[], z: Complex): { re: number; im: number; small: 
     pr = npr;
     bound = bound * ax + Math.abs(coef);
   }
-  const small = Math.hypot(pr, pi) <= 4 * EPS * bound;
+  const small = cabs(pr, pi) <= 4 * EPS * bound;
   if (!big) {
     const d = dr * dr + di * di;
     if (d === 0) return { re: 0, im: 0, small: true };
@@ -143,7 +149,7 @@ function aberth(c: number[]): Complex[] {
       const wr = (N.re * denr + N.im * deni) / dd;
       const wi = (N.im * denr - N.re * deni) / dd;
       z[i] = { re: z[i].re - wr, im: z[i].im - wi };
-      if (Math.hypot(wr, wi) <= EPS * Math.hypot(z[i].re, z[i].im)) done[i] = true;
+      if (cabs(wr, wi) <= EPS * cabs(z[i].re, z[i].im)) done[i] = true;
     }
     if (active === 0) break;
   }
@@ -151,7 +157,7 @@ function aberth(c: number[]): Complex[] {
 }
 
 function cleanRoot(r: Complex): Complex {
-  return Math.abs(r.im) <= 1e-10 * Math.hypot(r.re, r.im) ? { re: r.re, im: 0 } : r;
+  return Math.abs(r.im) <= 1e-10 * cabs(r.re, r.im) ? { re: r.re, im: 0 } : r;
 }
 
 /** Roots of a real polynomial come in conjugate pairs: make each pair exact. */
@@ -164,13 +170,13 @@ function pairConjugates(list: Complex[]): Complex[] {
     let best = -1;
     let bestD = Infinity;
     lower.forEach((l, j) => {
-      const d = Math.hypot(u.re - l.re, u.im + l.im);
+      const d = cabs(u.re - l.re, u.im + l.im);
       if (!used[j] && d < bestD) {
         bestD = d;
         best = j;
       }
     });
-    if (best < 0 || bestD > 1e-6 * Math.hypot(u.re, u.im)) {
+    if (best < 0 || bestD > 1e-6 * cabs(u.re, u.im)) {
       out.push(u);
       continue;
     }
@@ -183,7 +189,7 @@ function pairConjugates(list: Complex[]): Complex[] {
     if (!used[j]) out.push(l);
   });
   // An unpaired root of a real polynomial is real up to rounding.
-  return out.map((r) => (r.im !== 0 && !isPaired(r, out) && Math.abs(r.im) <= 1e-6 * Math.hypot(r.re, r.im) ? { re: r.re, im: 0 } : r));
+  return out.map((r) => (r.im !== 0 && !isPaired(r, out) && Math.abs(r.im) <= 1e-6 * cabs(r.re, r.im) ? { re: r.re, im: 0 } : r));
 }
 
 function isPaired(r: Complex, list: Complex[]): boolean {
@@ -201,11 +207,11 @@ function mergeClusters(c: number[], list: Complex[]): Complex[] {
   const taken = new Array<boolean>(out.length).fill(false);
   for (let i = 0; i < out.length; i++) {
     if (taken[i]) continue;
-    const scale = Math.hypot(out[i].re, out[i].im);
-    const nearIdx = out.map((_, j) => j).filter((j) => !taken[j] && Math.hypot(out[j].re - out[i].re, out[j].im - out[i].im) <= 0.05 * scale);
+    const scale = cabs(out[i].re, out[i].im);
+    const nearIdx = out.map((_, j) => j).filter((j) => !taken[j] && cabs(out[j].re - out[i].re, out[j].im - out[i].im) <= 0.05 * scale);
     const cx = nearIdx.reduce((s, j) => s + out[j].re, 0) / nearIdx.length;
     const cy = nearIdx.reduce((s, j) => s + out[j].im, 0) / nearIdx.length;
-    const near = nearIdx.map((j) => ({ j, d: Math.hypot(out[j].re - cx, out[j].im - cy) })).sort((a, b) => a.d - b.d);
+    const near = nearIdx.map((j) => ({ j, d: cabs(out[j].re - cx, out[j].im - cy) })).sort((a, b) => a.d - b.d);
     for (let m = near.length; m >= 2; m--) {
       const group = near.slice(0, m).map((x) => x.j);
       const z = polishMultiple(c, group.map((k) => out[k]), m);
@@ -234,7 +240,7 @@ function polishMultiple(c: number[], group: Complex[], m: number): Complex {
     if (den === 0) break;
     const step = { re: (f.re * g.re + f.im * g.im) / den, im: (f.im * g.re - f.re * g.im) / den };
     z = { re: z.re - step.re, im: z.im - step.im };
-    if (Math.hypot(step.re, step.im) <= EPS * Math.hypot(z.re, z.im)) break;
+    if (cabs(step.re, step.im) <= EPS * cabs(z.re, z.im)) break;
   }
   return z;
 }
@@ -261,12 +267,12 @@ function horner(c: number[], z: Complex): Complex {
 
 /** Whether p^(j)(z) is at rounding level for every j < m. */
 function isMultipleRoot(c: number[], z: Complex, m: number): boolean {
-  const a = Math.hypot(z.re, z.im);
+  const a = cabs(z.re, z.im);
   for (let j = 0; j < m; j++) {
     const d = derivative(c, j);
     const v = horner(d, z);
     const bound = d.reduce((acc, x) => acc * a + Math.abs(x), 0);
-    if (Math.hypot(v.re, v.im) > 1e3 * EPS * bound) return false;
+    if (cabs(v.re, v.im) > 1e3 * EPS * bound) return false;
   }
   return true;
 }

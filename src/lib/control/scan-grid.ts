@@ -5,7 +5,8 @@
  * function, so results do not depend on this grid.
  */
 import type { FactoredModel } from './frequency';
-import { magnitudeAt, pointAt, timeScales } from './frequency';
+import { magnitudeAt, pointInto, timeScales } from './frequency';
+import { cabs } from './roots';
 
 const PER_DECADE = 16;
 
@@ -22,7 +23,7 @@ export function scanGrid(m: FactoredModel): number[] {
   const w: number[] = [];
   for (let i = 0; i < n; i++) w.push(10 ** (a + ((b - a) * i) / (n - 1)));
   for (const r of [...m.poles, ...m.zeros]) {
-    const mag = Math.hypot(r.re, r.im);
+    const mag = cabs(r.re, r.im);
     if (mag === 0) continue;
     w.push(mag);
     const im = Math.abs(r.im);
@@ -51,8 +52,9 @@ export function loopScan(m: FactoredModel): LoopScan {
   const w = scanGrid(m);
   const mag = new Float64Array(w.length);
   const phaseDeg = new Float64Array(w.length);
+  const p = { mag: 0, phaseDeg: 0 };
   for (let i = 0; i < w.length; i++) {
-    const p = pointAt(m, w[i]);
+    pointInto(m, w[i], p);
     mag[i] = p.mag;
     phaseDeg[i] = p.phaseDeg;
   }

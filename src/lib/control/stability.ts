@@ -5,10 +5,11 @@
  * tracked adaptively so that no encirclement is stepped over, however long the dead time.
  */
 import type { Complex, TransferFunction } from './types';
-import { type FactoredModel, magnitudeAt, phaseAt, timeScales } from './frequency';
+import { type FactoredModel, pointInto, timeScales } from './frequency';
 import { add, product } from './polynomial';
 import { roots } from './roots';
 import { loopScan, type LoopScan } from './scan-grid';
+import { cabs } from './roots';
 
 /** A root with its damping ratio ζ = −re/|p| and natural frequency ωn = |p| (rad/s). */
 export interface RootInfo extends Complex {
@@ -19,7 +20,7 @@ export interface RootInfo extends Complex {
 }
 
 export function rootInfo(r: Complex): RootInfo {
-  const wn = Math.hypot(r.re, r.im);
+  const wn = cabs(r.re, r.im);
   return { re: r.re, im: r.im, damping: wn === 0 ? null : -r.re / wn, naturalFrequency: wn };
 }
 
@@ -27,7 +28,7 @@ export function rootInfo(r: Complex): RootInfo {
 const AXIS_TOL = 1e-9;
 
 function onAxis(r: Complex): boolean {
-  return Math.abs(r.re) <= AXIS_TOL * Math.max(Math.hypot(r.re, r.im), 1e-300);
+  return Math.abs(r.re) <= AXIS_TOL * Math.max(cabs(r.re, r.im), 1e-300);
 }
 
 /** All roots strictly in the left half plane (nothing on the imaginary axis). */
@@ -57,7 +58,7 @@ export function nyquistUnstableCount(m: FactoredModel): number {
   if (relDeg === 0 && Math.abs(m.gain) >= 1) return Infinity;
   const rhp = m.poles.filter((p) => p.re > 0 && !onAxis(p)).length;
   const axis = m.poles.filter((p) => onAxis(p) && p.im >= 0);
-  const origin = axis.filter((p) => p.im === 0 || Math.abs(p.im) <= AXIS_TOL * Math.hypot(p.re, p.im)).length;
+  const origin = axis.filter((p) => p.im === 0 || Math.abs(p.im) <= AXIS_TOL * cabs(p.re, p.im)).length;
   const scales = timeScales(m);
   const eps = Math.min(...scales) * 1e-3;
   const wEnd = endFrequency(m, scales);
@@ -85,21 +86,23 @@ export function nyquistUnstableCount(m: FactoredModel): number {
   return Math.max(0, Math.round(rhp - total / (2 * Math.PI)));
 }
 
+const point = { mag: 0, phaseDeg: 0 };
+
 function onePlusL(m: FactoredModel, w: number): Complex {
-  const mag = magnitudeAt(m, w);
-  const ph = (phaseAt(m, w) * Math.PI) / 180;
-  return { re: 1 + mag * Math.cos(ph), im: mag * Math.sin(ph) };
+  pointInto(m, w, point);
+  const ph = (point.phaseDeg * Math.PI) / 180;
+  return { re: 1 + point.mag * Math.cos(ph), im: point.mag * Math.sin(ph) };
 }
 
 /** A frequency beyond which |L(jw)| < 1 − margin for sure (bound from the root magnitudes). */
 function endFrequency(m: FactoredModel, scales: number[]): number {
-  const rMax = Math.max(...scales, ...[...m.poles, ...m.zeros].map((r) => Math.hypot(r.re, r.im)));
+  const rMax = Math.max(...scales, ...[...m.poles, ...m.zeros].map((r) => cabs(r.re, r.im)));
   const limit = m.pr.length === m.zr.length ? (1 + Math.abs(m.gain)) / 2 : 0.5;
   let w = 2 * rMax;
   const bound = (x: number) => {
     let v = Math.abs(m.gain);
-    for (const z of m.zeros) v *= x + Math.hypot(z.re, z.im);
-    for (const p of m.poles) v /= x - Math.hypot(p.re, p.im);
+    for (const z of m.zeros) v *= x + cabs(z.re, z.im);
+    for (const p of m.poles) v /= x - cabs(p.re, p.im);
     return v;
   };
   for (let i = 0; i < 200 && bound(w) >= limit; i++) w *= 2;
@@ -116,7 +119,7 @@ function trackArgument(m: FactoredModel, a: number, b: number, scan: LoopScan | 
   let prevW = a;
   let prev = onePlusL(m, a);
   let delta = 0;
-  let closest = Math.hypot(prev.re, prev.im);
+  let closest = cabs(prev.re, prev.im);
   const maxTurn = Math.PI / 6;
   const stepTo = (w1: number, depth: number, known?: Complex): void => {
     const next = known ?? onePlusL(m, w1);
@@ -130,7 +133,7 @@ function trackArgument(m: FactoredModel, a: number, b: number, scan: LoopScan | 
       return;
     }
     delta += turn;
-    closest = Math.min(closest, Math.hypot(next.re, next.im));
+    closest = Math.min(closest, Math.sqrt(next.re * next.re + next.im * next.im));
     prev = next;
     prevW = w1;
   };
