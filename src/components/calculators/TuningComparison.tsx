@@ -12,6 +12,7 @@ import ParamControl from './ParamControl';
 import { describeError } from './describe-error';
 import { modelFields, modelScale, sliderRange } from './model-fields';
 import { useCalcUpdate } from './useCalcUpdate';
+import { useSettled } from './useSettled';
 import { useUrlState } from './useUrlState';
 import './calculators.css';
 
@@ -39,6 +40,9 @@ type State = z.infer<typeof StateSchema>;
 
 type Computed = { ok: true; r: ComparisonResult } | { ok: false; message: string };
 
+/** Quiet time after the last model change before the rules are compared again, ms. */
+const SETTLE_MS = 180;
+
 function Select<T extends string>({ label, value, options, onChange, testId }: { label: string; value: T; options: [T, string][]; onChange(v: T): void; testId?: string }) {
   return (
     <label className="calc-field">
@@ -55,14 +59,18 @@ export default function TuningComparison({ model, controller, id = 'tuning-compa
   const { state, update } = useUrlState(id, StateSchema, { model, controller, form: 'published', units: { gain: 'ratio', integral: 's', derivative: 's' } });
   const chartRef = useRef<uPlot | null>(null);
 
+  // Every rule is analysed several times over: recompute once the sliders rest, not on each step.
+  const beginRef = useRef<() => void>(() => {});
+  const { settled: settledModel, pending } = useSettled(state.model, SETTLE_MS, () => beginRef.current());
   const computed = useMemo<Computed>(() => {
     try {
-      return { ok: true, r: compareWithResponses({ model: state.model, controller: state.controller }) };
+      return { ok: true, r: compareWithResponses({ model: settledModel, controller: state.controller }) };
     } catch (error) {
       return { ok: false, message: describeError(error) };
     }
-  }, [state.model, state.controller]);
+  }, [settledModel, state.controller]);
   const begin = useCalcUpdate([computed, state.form, state.units]);
+  beginRef.current = begin;
   const set = (change: (s: State) => State) => {
     begin();
     update(change);
@@ -108,7 +116,6 @@ export default function TuningComparison({ model, controller, id = 'tuning-compa
                 min={f.min}
                 value={values[f.key] ?? 0}
                 range={sliderRange(f, start[f.key] ?? 0, modelScale(model))}
-                onInput={begin}
                 onChange={(v) => update((s) => ({ ...s, model: { ...s.model, [f.key]: v } as TuningModel }))}
                 testId={`${id}-${f.key}`}
               />
@@ -122,7 +129,7 @@ export default function TuningComparison({ model, controller, id = 'tuning-compa
         </div>
         <div className="calc-charts">
           {computed.ok ? (
-            <div className="calc-scroll">
+            <div className="calc-scroll" style={{ opacity: pending ? 0.55 : 1 }} aria-busy={pending}>
               <table className="calc-table" data-testid={`${id}-table`}>
                 <caption className="sr-only">Settings and predicted figures of each rule</caption>
                 <thead>

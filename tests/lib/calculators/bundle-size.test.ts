@@ -58,6 +58,12 @@ function chunk(prefix: string): string {
   return found;
 }
 
+/**
+ * A message of typed-function, the dispatcher inside every mathjs build, that minifying keeps
+ * (checked: it is in node_modules/mathjs/lib/browser/math.js).
+ */
+const MATHJS_MARK = /Unexpected type of argument/;
+
 const sum = (files: Iterable<string>) => [...files].reduce((kb, f) => kb + gzipKb(f), 0);
 
 describe('calculator bundle sizes', () => {
@@ -75,6 +81,16 @@ describe('calculator bundle sizes', () => {
       expect(kb).toBeLessThan(budget);
     });
   }
+
+  it('ships no mathjs in any calculator (the engine parser stays on the server)', () => {
+    expect(fs.readFileSync(path.resolve('node_modules/mathjs/lib/browser/math.js'), 'utf8')).toMatch(MATHJS_MARK);
+    for (const island of Object.keys(ISLAND_BUDGETS)) {
+      const { files, lazy } = graph(chunk(island));
+      for (const f of [...files, ...lazy]) {
+        expect(fs.readFileSync(path.join(ASSETS, f), 'utf8'), `${island} pulls mathjs through ${f}`).not.toMatch(MATHJS_MARK);
+      }
+    }
+  });
 
   it(`keeps a recipe page with a loop response and a frequency view under ${PAGE_BUDGET} KB gzip in total`, () => {
     const files = new Set<string>();
