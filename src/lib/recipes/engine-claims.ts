@@ -9,9 +9,20 @@ export const engineAnalyze: Analyze = (request) => {
   return { step: r.step as never, margins: r.margins as never, stable: r.stable };
 };
 
-/** Every loop's claims of a recipe, recomputed with the engine. */
+/** Reports already computed in this process, by the loops' numbers (pages ask again on every view). */
+const computed = new Map<string, LoopClaimReport[]>();
+const KEEP = 500;
+
+/** Every loop's claims of a recipe, recomputed with the engine (once per distinct set of numbers). */
 export function recipeClaimReports(recipe: RecipeFrontmatter): LoopClaimReport[] {
-  return checkRecipeClaims(recipe, engineAnalyze);
+  const key = JSON.stringify([recipe.model, recipe.controller, recipe.sensor, recipe.claims, recipe.tFinal, recipe.innerLoop]);
+  let reports = computed.get(key);
+  if (!reports) {
+    reports = checkRecipeClaims(recipe, engineAnalyze);
+    if (computed.size >= KEEP) computed.delete(computed.keys().next().value!);
+    computed.set(key, reports);
+  }
+  return reports;
 }
 
 /**

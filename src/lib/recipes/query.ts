@@ -4,6 +4,9 @@ import type { Rating, RecipeRecord } from './record';
 import type { SearchIndex } from './search/index';
 import { AREA_CODES, LOOP_TYPES, RECIPE_STATUSES } from './vocabulary';
 
+/** An enum whose error lists what it accepts. */
+const oneOf = <T extends readonly [string, ...string[]]>(values: T) => z.enum(values, { error: `Use one of ${values.join(', ')}.` });
+
 /** How a list of recipes may be ordered. */
 export const SORTS = ['relevance', 'title', 'reviewed', 'rating'] as const;
 
@@ -12,15 +15,15 @@ export const RecipeQuerySchema = z.object({
   /** Words to search for (title, summary, tags, loop tags, body). */
   q: z.string().trim().max(200, 'Keep the search under 200 characters.').optional(),
   /** One status; absent = published only. */
-  status: z.enum(RECIPE_STATUSES).optional(),
+  status: oneOf(RECIPE_STATUSES).optional(),
   /** One loop type. */
-  loopType: z.enum(LOOP_TYPES).optional(),
+  loopType: oneOf(LOOP_TYPES).optional(),
   /** One process-area code. */
-  area: z.enum(AREA_CODES).optional(),
+  area: oneOf(AREA_CODES).optional(),
   /** Only recipes rated at least this many stars on average (1–5). */
-  minRating: z.coerce.number().min(1).max(5).optional(),
+  minRating: z.coerce.number({ error: 'Give minRating as a number of stars from 1 to 5.' }).min(1, 'Give minRating as a number of stars from 1 to 5.').max(5, 'Give minRating as a number of stars from 1 to 5.').optional(),
   /** Order: relevance (with q), title, reviewed (newest first), rating (best first). */
-  sort: z.enum(SORTS).optional(),
+  sort: oneOf(SORTS).optional(),
 });
 
 export type RecipeQuery = z.output<typeof RecipeQuerySchema>;
