@@ -27,7 +27,7 @@ export interface FitPlot {
   t: number[];
   pv: number[];
   co: number[] | null;
-  curves: { type: ModelType; y: number[]; residual: number[] }[];
+  curves: { type: ModelType; fitId: number | null; y: number[]; residual: number[] }[];
 }
 
 /** Fits each requested model; a model that cannot be fitted reports its error instead of failing all. */
@@ -51,14 +51,14 @@ function fitInput(series: StepSeries): { t: number[]; y: number[]; u: number[] |
 }
 
 /** The thinned series with every fitted model's curve and residual (y − fit). */
-export function fitPlot(series: StepSeries, fits: { type: ModelType; model: ProcessModel }[]): FitPlot {
+export function fitPlot(series: StepSeries, fits: { type: ModelType; model: ProcessModel; id?: number }[]): FitPlot {
   const idx = decimateIndices(series.t.length, PLOT_SAMPLES, series.co);
   const t = pick(series.t, idx);
   const pv = pick(series.pv, idx);
   const co = series.co ? pick(series.co, idx) : null;
-  const curves = fits.map(({ type, model }) => {
+  const curves = fits.map(({ type, model, id }) => {
     const y = modelCurve(series, model, t);
-    return { type, y, residual: y.map((v, i) => pv[i] - v) };
+    return { type, fitId: id ?? null, y, residual: y.map((v, i) => pv[i] - v) };
   });
   return { t, pv, co, curves };
 }

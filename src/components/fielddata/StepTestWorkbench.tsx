@@ -1,0 +1,37 @@
+import { useState } from 'react';
+import '../calculators/calculators.css';
+import EvidenceStep from './EvidenceStep';
+import FileStep from './FileStep';
+import FitStep from './FitStep';
+import TuningStep, { type TunedChoice } from './TuningStep';
+import type { FitAnswer, FitView, RecipeOption } from './types';
+
+export interface StepTestWorkbenchProps {
+  areas: { code: string; name: string }[];
+  recipes: RecipeOption[];
+  loopTypes: readonly string[];
+}
+
+/** Upload a step test, fit the models, pick one, choose tuning and save it all as evidence. */
+export default function StepTestWorkbench({ areas, recipes, loopTypes }: StepTestWorkbenchProps) {
+  const [stepTestId, setStepTestId] = useState<number | null>(null);
+  const [fit, setFit] = useState<FitView | null>(null);
+  const [answer, setAnswer] = useState<FitAnswer | null>(null);
+  const [tuning, setTuning] = useState<TunedChoice | null>(null);
+
+  return (
+    <div data-testid="fd-workbench" data-ready="true">
+      <FileStep areas={areas} onUploaded={(id) => { setStepTestId(id); setFit(null); setTuning(null); }} />
+      {stepTestId !== null && (
+        <FitStep key={stepTestId} stepTestId={stepTestId} loopTypes={loopTypes} onChosen={(f, a) => { setFit(f); setAnswer(a); }} />
+      )}
+      {fit && answer && (
+        <TuningStep model={fit.model} pvUnit={answer.stepTest.mapping.pv.unit} coUnit={answer.stepTest.mapping.co?.unit ?? '%'} onChange={setTuning} />
+      )}
+      {fit && answer && tuning && stepTestId !== null && (
+        <EvidenceStep stepTestId={stepTestId} fitId={fit.id} tuning={tuning} recipes={recipes} matches={fit.matches}
+          loopTypes={loopTypes} loopType={answer.loopType} tag={answer.stepTest.tag} />
+      )}
+    </div>
+  );
+}
