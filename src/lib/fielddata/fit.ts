@@ -13,7 +13,7 @@ export const MODEL_TYPES = ['fopdt', 'sopdt', 'ipdt'] as const;
 export type ModelType = (typeof MODEL_TYPES)[number];
 
 /** Samples handed to the optimizer (thinned evenly beyond this; the fit takes seconds, not minutes). */
-export const FIT_SAMPLES = 5000;
+export const FIT_SAMPLES = 2000;
 /** Samples sent to the browser for plotting. */
 export const PLOT_SAMPLES = 1500;
 

@@ -47,8 +47,11 @@ export function parseTable(text: string): TableResult {
 
   Papa.parse<string[]>(text, {
     delimiter,
-    skipEmptyLines: 'greedy',
+    // Empty lines are skipped by the parser; lines of only spaces (cheaper to test here than
+    // with its "greedy" option) are skipped below.
+    skipEmptyLines: true,
     step(result, parser) {
+      if (isBlank(result.data)) return;
       const { start: line, end: endLine } = lines.rowLines(previousCursor, result.meta.cursor);
       previousCursor = result.meta.cursor;
       const cells = trimTrailingEmpty(result.data, columns);
@@ -83,6 +86,11 @@ export function parseTable(text: string): TableResult {
   return { table: { dialect, header, columns, rows, issues }, issue: null };
 }
 
+function isBlank(cells: string[]): boolean {
+  for (const c of cells) if (c.trim() !== '') return false;
+  return true;
+}
+
 /** A header row has a non-empty cell that is neither a number nor a date and time. */
 function isHeader(cells: string[], dialect: Dialect): boolean {
   return cells.some((c) => c.trim() !== '' && parseNumberCell(c, dialect.decimal) === null && parseTimestamp(c) === null);
@@ -110,7 +118,7 @@ function lineLocator(text: string) {
   let line = 1;
   /** Line of the character at p. */
   function lineAt(p: number): number {
-    for (; pos < p; pos++) if (text[pos] === '\n') line++;
+    for (; pos < p; pos++) if (text.charCodeAt(pos) === 10) line++;
     return line;
   }
   return {
@@ -119,8 +127,9 @@ function lineLocator(text: string) {
       let p = from;
       // Skip the blank lines the parser skipped before this row.
       for (let lineStart = p; p < cursor; p++) {
-        if (text[p] === '\n') lineStart = p + 1;
-        else if (text[p] !== ' ' && text[p] !== '\t') {
+        const c = text.charCodeAt(p);
+        if (c === 10) lineStart = p + 1;
+        else if (c !== 32 && c !== 9) {
           p = lineStart;
           break;
         }

@@ -34,7 +34,8 @@ export function decodeUpload(bytes: Uint8Array): DecodedText {
 
 /** Drops a BOM, unifies line ends and refuses a file with no content. */
 export function normalizeText(raw: string): DecodedText {
-  const text = raw.replace(/^\uFEFF/, '').replace(/\r\n?/g, '\n');
+  const noBom = raw.charCodeAt(0) === 0xfeff ? raw.slice(1) : raw;
+  const text = noBom.includes('\r') ? noBom.replaceAll('\r\n', '\n').replaceAll('\r', '\n') : noBom;
   if (text.trim() === '') {
     return { text: null, issue: fileIssue('The file is empty: upload a CSV file with a time column and a process-value column.') };
   }
