@@ -20,5 +20,5 @@ export interface RecipeCatalog {
   /** Published recipes with their models, for matching. */
   published(): Promise<MatchCandidate[]>;
   /** Starts a draft recipe owned by the actor; null when this installation cannot (no authored recipes). */
-  createDraft(input: { title: string; summary: string; loopType: string; model: unknown; controller: unknown }): Promise<CatalogRecipe | null>;
+  createDraft(input: { title: string; summary: string; loopType: string; body: string; model: unknown; controller: unknown }): Promise<CatalogRecipe | null>;
 }

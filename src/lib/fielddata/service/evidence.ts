@@ -13,6 +13,7 @@ import type { Actor } from '../actor';
 import { fromZod, invalid, missing, FieldDataProblem } from '../problem';
 import type { CatalogRecipe, RecipeCatalog } from '../recipe-catalog';
 import { toPidController } from '../tuning-setting';
+import { draftBody } from '../draft-body';
 
 export async function saveEvidence(
   knex: Knex,
@@ -40,7 +41,8 @@ export async function saveEvidence(
     if (!recipe) throw invalid(`There is no recipe "${req.recipeSlug}" that you can see.`, 'recipeSlug');
     if (recipe.status === 'retired') throw new FieldDataProblem(409, 'recipe_retired', `The recipe "${recipe.slug}" is retired; attach the evidence to the recipe that supersedes it.`, 'recipeSlug');
   } else {
-    recipe = await catalog.createDraft({ ...req.newDraft!, model: fit.model, controller: toPidController(req.tuning.setting) });
+    const body = draftBody({ tag: stepTest.tag, testedAt: stepTest.uploadedAt, by: actor.name, model: fit.model, fit: { rmse: fit.rmse, r2: fit.r2 }, tuning: req.tuning, note: req.note });
+    recipe = await catalog.createDraft({ ...req.newDraft!, body, model: fit.model, controller: toPidController(req.tuning.setting) });
     if (!recipe) throw new FieldDataProblem(409, 'drafts_unavailable', 'New draft recipes cannot be started here yet; attach the evidence to an existing recipe.', 'newDraft');
     createdDraft = true;
   }
