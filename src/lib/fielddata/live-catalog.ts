@@ -48,3 +48,15 @@ export function liveCatalog(knex: Knex, actor: Actor & { id: string }, request: 
     },
   };
 }
+
+/** Recipes evidence may be attached to: every published one, and drafts the actor may see. */
+export async function attachableRecipes(knex: Knex, actor: Actor & { id: string }): Promise<{ slug: string; title: string; loopType: string }[]> {
+  const rows = await listRecipesWithRevisions(knex, ['published', 'draft', 'in_review']);
+  return rows
+    .filter((row) => canView(actor, row))
+    .map((row) => {
+      const fm = frontmatterOf(row);
+      return { slug: row.slug, title: row.status === 'published' ? fm.title : `${fm.title} (${row.status.replace('_', ' ')})`, loopType: fm.loopType };
+    })
+    .sort((a, b) => a.title.localeCompare(b.title));
+}

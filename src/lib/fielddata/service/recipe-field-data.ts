@@ -19,9 +19,14 @@ const SPARK_POINTS = 120;
 
 export async function recipeFieldData(knex: Knex, folder: string, slug: string): Promise<{ evidence: EvidenceWithPlot[]; loops: Loop[] }> {
   const [evidence, loops] = await Promise.all([evidenceOfRecipe(knex, slug), listLoops(knex, { recipe: slug })]);
-  const withPlots: EvidenceWithPlot[] = [];
-  for (const e of evidence) withPlots.push({ ...e, plot: await plotOf(knex, folder, e) });
-  return { evidence: withPlots, loops };
+  return { evidence: await withPlots(knex, folder, evidence), loops };
+}
+
+/** Evidence with its small plots. */
+export async function withPlots(knex: Knex, folder: string, evidence: EvidenceRecord[]): Promise<EvidenceWithPlot[]> {
+  const out: EvidenceWithPlot[] = [];
+  for (const e of evidence) out.push({ ...e, plot: await plotOf(knex, folder, e) });
+  return out;
 }
 
 /** Loops still following a recipe (the retire dialog lists them). */
