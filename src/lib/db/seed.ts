@@ -1,11 +1,13 @@
 import type { Knex } from 'knex';
 import * as plantAreas from './seeds/01-plant-areas';
 import * as demoUsers from './seeds/02-demo-users';
+import * as loopRegister from './seeds/05-loop-register';
 
 /** Every demo seed in order; each one is idempotent. New seeds are added here and in seeds/. */
 const SEEDS: { name: string; seed(knex: Knex): Promise<void> }[] = [
   { name: 'plant-areas', ...plantAreas },
   { name: 'demo-users', ...demoUsers },
+  { name: 'loop-register', ...loopRegister },
 ];
 
 const SEEDED_KEY = 'demo_seeded_at';

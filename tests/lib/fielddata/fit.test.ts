@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitPlot, fitSeries } from '../../../src/lib/fielddata/fit';
 import { loadSeries, storeStepTest } from '../../../src/lib/fielddata/upload';
 import { stepTestFolder } from '../../../src/lib/fielddata/storage';
-import { seedDemo } from '../../../src/lib/db/seed';
+import { seed as seedAreas } from '../../../src/lib/db/seeds/01-plant-areas';
 import { tempDatabase } from '../../support/temp-db';
 import { toCsv, type GeneratedTest } from '../../support/step-test-csv';
 
@@ -43,7 +43,7 @@ const rows: Row[] = [
 let db: Awaited<ReturnType<typeof tempDatabase>>;
 beforeAll(async () => {
   db = await tempDatabase();
-  await seedDemo(db.knex);
+  await seedAreas(db.knex);
 });
 afterAll(async () => db.cleanup());
 

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { loadSeries, storeStepTest, type StepTestDetails } from '../../../src/lib/fielddata/upload';
 import { stepTestFolder } from '../../../src/lib/fielddata/storage';
-import { seedDemo } from '../../../src/lib/db/seed';
+import { seed as seedAreas } from '../../../src/lib/db/seeds/01-plant-areas';
 import { tempDatabase } from '../../support/temp-db';
 
 const enc = (s: string) => new TextEncoder().encode(s);
@@ -17,7 +17,7 @@ let db: Awaited<ReturnType<typeof tempDatabase>>;
 let folder: string;
 beforeEach(async () => {
   db = await tempDatabase();
-  await seedDemo(db.knex);
+  await seedAreas(db.knex);
   folder = stepTestFolder(db.file);
 });
 afterEach(async () => db.cleanup());

@@ -4,7 +4,7 @@ import { fitStepTest, uploadStepTest } from '../../../../src/lib/fielddata/servi
 import { createLoop } from '../../../../src/lib/fielddata/service/loops';
 import { stepTestFolder } from '../../../../src/lib/fielddata/storage';
 import { FieldDataProblem } from '../../../../src/lib/fielddata/problem';
-import { seedDemo } from '../../../../src/lib/db/seed';
+import { seed as seedAreas } from '../../../../src/lib/db/seeds/01-plant-areas';
 import { tempDatabase } from '../../../support/temp-db';
 import { listCatalog } from '../../../support/recipe-catalog';
 import { toCsv } from '../../../support/step-test-csv';
@@ -20,7 +20,7 @@ let fitId: number;
 
 beforeEach(async () => {
   db = await tempDatabase();
-  await seedDemo(db.knex);
+  await seedAreas(db.knex);
   folder = stepTestFolder(db.file);
   catalog = listCatalog([
     { slug: 'htst-hot-water', title: 'HTST hot water', loopType: 'temperature', status: 'published', url: '/recipes/htst-hot-water', model: { type: 'fopdt', k: 0.5, tau: 40, theta: 5 } },

@@ -1,7 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { createLoop, exportLoops, getLoop, importLoops, queryLoops, removeLoop, replaceLoop } from '../../../../src/lib/fielddata/service/loops';
 import { FieldDataProblem } from '../../../../src/lib/fielddata/problem';
-import { seedDemo } from '../../../../src/lib/db/seed';
+import { seed as seedAreas } from '../../../../src/lib/db/seeds/01-plant-areas';
 import { tempDatabase } from '../../../support/temp-db';
 import { listCatalog } from '../../../support/recipe-catalog';
 
@@ -12,7 +12,7 @@ const base = { area: 'htst', ownerEmail: 'wren@brindlewood.example' };
 
 beforeEach(async () => {
   db = await tempDatabase();
-  await seedDemo(db.knex);
+  await seedAreas(db.knex);
 });
 afterEach(async () => db.cleanup());
 

@@ -3,7 +3,7 @@ import { createRecipe } from '../../../../src/lib/editorial/create';
 import { transitionRecipe } from '../../../../src/lib/editorial/transitions';
 import { stopCompileWorker } from '../../../../src/lib/recipes/authored-mdx/compile-isolated';
 import { insertLoop } from '../../../../src/lib/db/loops';
-import { seedDemo } from '../../../../src/lib/db/seed';
+import { seed as seedAreas } from '../../../../src/lib/db/seeds/01-plant-areas';
 import { loopsFollowing } from '../../../../src/lib/fielddata/service/recipe-field-data';
 import { DRAFT, PEOPLE, testContext } from '../../editorial/context';
 
@@ -14,7 +14,7 @@ describe('retiring a recipe that loops follow', () => {
   let slug: string;
   beforeEach(async () => {
     t = await testContext();
-    await seedDemo(t.knex);
+    await seedAreas(t.knex);
     slug = (await createRecipe(t.ctx, PEOPLE.author, DRAFT)).slug;
     await transitionRecipe(t.ctx, PEOPLE.author, slug, 'submit');
     await transitionRecipe(t.ctx, PEOPLE.curator, slug, 'publish');

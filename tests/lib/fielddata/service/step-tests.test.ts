@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { getStepTest, previewStepTest, uploadStepTest } from '../../../../src/lib/fielddata/service/step-tests';
 import { FieldDataProblem } from '../../../../src/lib/fielddata/problem';
 import { stepTestFolder } from '../../../../src/lib/fielddata/storage';
-import { seedDemo } from '../../../../src/lib/db/seed';
+import { seed as seedAreas } from '../../../../src/lib/db/seeds/01-plant-areas';
 import { tempDatabase } from '../../../support/temp-db';
 import { listCatalog } from '../../../support/recipe-catalog';
 import { toCsv } from '../../../support/step-test-csv';
@@ -14,7 +14,7 @@ const CSV = toCsv({ model: { type: 'fopdt', k: 0.42, tau: 30, theta: 4 }, dt: 0.
 let db: Awaited<ReturnType<typeof tempDatabase>>;
 beforeEach(async () => {
   db = await tempDatabase();
-  await seedDemo(db.knex);
+  await seedAreas(db.knex);
 });
 afterEach(async () => db.cleanup());
 
