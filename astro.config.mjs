@@ -11,6 +11,10 @@ export default defineConfig({
   output: 'server',
   adapter: node({ mode: 'standalone' }),
   server: { port: 4321, host: 'localhost' },
+  // Without allowed domains the server reads every request as addressed to "http://localhost", so
+  // Astro's same-origin check refuses every multipart upload sent from the real address. An empty
+  // pattern takes the Host the client used; a cross-site page still cannot make its Origin match.
+  security: { checkOrigin: true, allowedDomains: [{}] },
   integrations: [react(), mdx()],
   markdown: {
     remarkPlugins: [remarkMath],
