@@ -23,7 +23,7 @@ describe('loop register over HTTP', () => {
     const all = (await (await call('GET', '/api/v1/loops', 'reader')).json()).loops;
     expect(all.length).toBeGreaterThanOrEqual(8);
     const htst = (await (await call('GET', '/api/v1/loops?area=htst', 'reader')).json()).loops.map((l: { tag: string }) => l.tag);
-    expect(htst).toEqual(['LIC-220', 'TIC-210']);
+    expect(htst).toEqual(['LIC-220', 'TIC-210', 'TIC-250']);
     const following = (await (await call('GET', '/api/v1/loops?recipe=raw-milk-reception-flow', 'reader')).json()).loops.map((l: { tag: string }) => l.tag);
     expect(following).toEqual(['FIC-101', 'FIC-102']);
     const old = (await (await call('GET', '/api/v1/loops?tunedBefore=2022-01-01', 'reader')).json()).loops.map((l: { tag: string }) => l.tag);
@@ -61,16 +61,16 @@ describe('loop register over HTTP', () => {
   it('exports the register as CSV and imports it back (curators), all rows or none', async () => {
     const csv = await (await fetch(`${server.url}/api/v1/loops/export.csv?area=htst`, { headers: { Cookie: who.reader } })).text();
     expect(csv.split('\r\n')[0]).toBe('tag,area,description,recipe,form,gain,integral,derivative,time_unit,gain_unit,commissioned_by,commissioned_at,owner_email');
-    expect(csv.split('\r\n').filter(Boolean)).toHaveLength(3);
+    expect(csv.split('\r\n').filter(Boolean)).toHaveLength(4);
     const changed = csv.replace('HTST balance tank level', 'HTST balance tank level (new transmitter)');
     const send = (role: string, text: string) =>
       fetch(`${server.url}/api/v1/loops/import`, { method: 'POST', headers: { Cookie: who[role], Origin: server.url, 'Content-Type': 'text/csv' }, body: text });
     expect((await send('author', changed)).status).toBe(403);
     const ok = await send('curator', changed);
-    expect(await ok.json()).toEqual({ created: [], updated: ['LIC-220', 'TIC-210'] });
+    expect(await ok.json()).toEqual({ created: [], updated: ['LIC-220', 'TIC-210', 'TIC-250'] });
     const bad = await send('curator', `${changed}XIC-1,htst,,,,,,,,,,,nobody@brindlewood.example\r\n`);
     expect(bad.status).toBe(400);
     const body = await bad.json();
-    expect(body.issues[0].message).toBe('Line 4, column 1 (tag): A loop tag is 2–5 letters, a hyphen and 2–5 digits, e.g. TIC-210 or FIC-101A.');
+    expect(body.issues[0].message).toBe('Line 5, column 1 (tag): A loop tag is 2–5 letters, a hyphen and 2–5 digits, e.g. TIC-210 or FIC-101A.');
   });
 });

@@ -25,7 +25,7 @@ describe('step tests over HTTP', () => {
 
   const form = (csv: string | Uint8Array, fields: Record<string, string> = {}, name = 'tic210.csv') => {
     const f = new FormData();
-    f.set('file', new Blob([csv]), name);
+    f.set('file', new Blob([csv as BlobPart]), name);
     for (const [k, v] of Object.entries(fields)) f.set(k, v);
     return f;
   };
