@@ -1,7 +1,6 @@
-import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { createRecipe } from '../../../../src/lib/editorial/create';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { insertRecipe, insertRevision } from '../../../../src/lib/db/authored-recipes';
 import { transitionRecipe } from '../../../../src/lib/editorial/transitions';
-import { stopCompileWorker } from '../../../../src/lib/recipes/authored-mdx/compile-isolated';
 import { insertLoop } from '../../../../src/lib/db/loops';
 import { seed as seedAreas } from '../../../../src/lib/db/seeds/01-plant-areas';
 import { loopsFollowing } from '../../../../src/lib/fielddata/service/recipe-field-data';
@@ -15,9 +14,15 @@ describe('retiring a recipe that loops follow', () => {
   beforeEach(async () => {
     t = await testContext();
     await seedAreas(t.knex);
-    slug = (await createRecipe(t.ctx, PEOPLE.author, DRAFT)).slug;
-    await transitionRecipe(t.ctx, PEOPLE.author, slug, 'submit');
-    await transitionRecipe(t.ctx, PEOPLE.curator, slug, 'publish');
+    // A published authored recipe written straight to its tables: the body compiler is not under test here.
+    slug = 'htst-hot-water-temperature-pi';
+    const now = '2026-11-02T08:00:00.000Z';
+    const id = await insertRecipe(t.knex, {
+      slug, status: 'published', owner_id: PEOPLE.author.id, owner_email: PEOPLE.author.email, owner_name: PEOPLE.author.name, current_revision: 1,
+      created_at: now, updated_at: now, submitted_at: now, published_at: now, reviewed_at: now, retired_at: null, retired_reason: null, superseded_by: null, review_comment: null,
+    });
+    const { body, ...frontmatter } = DRAFT;
+    await insertRevision(t.knex, { recipe_id: id, revision: 1, author_id: PEOPLE.author.id, author_email: PEOPLE.author.email, created_at: now, message: 'First draft', frontmatter_json: JSON.stringify(frontmatter), body, html: '<p>On TIC-210.</p>' });
     const loop = { area: 'htst', description: 'Hot-water set', recipeSlug: slug, tuning: null, commissionedBy: null, commissionedAt: null };
     await insertLoop(t.knex, { ...loop, tag: 'TIC-210', ownerEmail: 'wren.adeyemi@brindlewood.example' });
     await insertLoop(t.knex, { ...loop, tag: 'TIC-211', ownerEmail: 'wren.adeyemi@brindlewood.example' });
@@ -26,7 +31,6 @@ describe('retiring a recipe that loops follow', () => {
     t.mail.length = 0;
   });
   afterEach(() => t.cleanup());
-  afterAll(() => stopCompileWorker());
 
   it('lists the loops that still follow it', async () => {
     expect((await loopsFollowing(t.knex, slug)).map((l) => l.tag)).toEqual(['TIC-210', 'TIC-211', 'TIC-212']);
