@@ -1,5 +1,5 @@
 import { METRIC_LABELS, type ClaimCheck } from '../../lib/calculators/claims';
-import { formatNumber } from '../../lib/calculators/units';
+import { formatWithUnit } from '../../lib/calculators/units';
 
 /** The recipe's claims, each marked holding or failing for the settings as they are now. */
 export default function ClaimList({ checks, testId }: { checks: ClaimCheck[]; testId?: string }) {
@@ -13,8 +13,8 @@ export default function ClaimList({ checks, testId }: { checks: ClaimCheck[]; te
           <li key={i} data-holds={holds}>
             <span className="calc-badge" data-holds={holds}>{holds ? 'HOLDS' : 'FAILS'}</span>
             <span>
-              {label}{step} {claim.op === '<=' ? '≤' : '≥'} {formatNumber(claim.value)}{unit ? ` ${unit}` : ''}
-              <span className="calc-note"> — now {formatNumber(actual)}{actual !== null && unit ? ` ${unit}` : ''}</span>
+              {label}{step} {claim.op === '<=' ? '≤' : '≥'} {formatWithUnit(claim.value, unit)}
+              <span className="calc-note"> — now {formatWithUnit(actual, unit)}</span>
             </span>
           </li>
         );

@@ -2,7 +2,7 @@ import { useMemo, useRef } from 'react';
 import type uPlot from 'uplot';
 import { z } from 'zod';
 import { frequencyView, type FrequencyViewResult } from '../../lib/calculators/frequency-view';
-import { formatNumber } from '../../lib/calculators/units';
+import { formatNumber, formatWithUnit } from '../../lib/calculators/units';
 import { PidControllerSchema, type PidControllerInput } from '../../lib/schemas/controller';
 import { ProcessModelSchema, type ProcessModelInput } from '../../lib/schemas/process-model';
 import type { TransferFunctionInput } from '../../lib/schemas/transfer-function';
@@ -96,10 +96,10 @@ export default function FrequencyView({ model, controller, sensor, id = 'frequen
         <div className="calc-charts">
           {m ? (
             <dl className="calc-facts" data-testid={`${id}-margins`}>
-              <div><dt>Phase margin</dt><dd data-testid={`${id}-pm`}>{formatNumber(m.phaseMarginDeg)}{m.phaseMarginDeg !== null ? '°' : ''}</dd></div>
+              <div><dt>Phase margin</dt><dd data-testid={`${id}-pm`}>{formatWithUnit(m.phaseMarginDeg, '°')}</dd></div>
               <div><dt>Gain margin</dt><dd data-testid={`${id}-gm`}>{formatNumber(m.gainMargin)}</dd></div>
               <div><dt>GM (dB)</dt><dd>{formatNumber(m.gainMarginDb)}</dd></div>
-              <div><dt>Delay margin</dt><dd>{formatNumber(m.delayMargin)}{m.delayMargin !== null ? ' s' : ''}</dd></div>
+              <div><dt>Delay margin</dt><dd>{formatWithUnit(m.delayMargin, 's')}</dd></div>
               <div><dt>ωgc</dt><dd>{formatNumber(m.gainCrossover)}</dd></div>
               <div><dt>ωpc</dt><dd>{formatNumber(m.phaseCrossover)}</dd></div>
               <div><dt>Ms</dt><dd data-testid={`${id}-ms`}>{formatNumber(m.ms)}</dd></div>

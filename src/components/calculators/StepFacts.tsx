@@ -1,11 +1,11 @@
 import type { LoopResult } from '../../lib/calculators/loop';
-import { formatNumber } from '../../lib/calculators/units';
+import { formatWithUnit } from '../../lib/calculators/units';
 
 function Fact({ label, value, unit, testId }: { label: string; value: number | null; unit?: string; testId?: string }) {
   return (
     <div>
       <dt>{label}</dt>
-      <dd data-testid={testId}>{formatNumber(value)}{value !== null && unit ? ` ${unit}` : ''}</dd>
+      <dd data-testid={testId}>{formatWithUnit(value, unit ?? '')}</dd>
     </div>
   );
 }

@@ -107,3 +107,10 @@ export function formatNumber(value: number | null | undefined, digits = DISPLAY_
   if (magnitude >= 1e6 || magnitude < 1e-4) return value.toExponential(digits - 1);
   return String(Number(value.toPrecision(digits)));
 }
+
+/** A number with its unit as SI writes it ("12 s", "4.2 %", but "63.3°"); "—" for none. */
+export function formatWithUnit(value: number | null | undefined, unit: string): string {
+  const text = formatNumber(value);
+  if (text === '—' || unit === '') return text;
+  return unit === '°' ? `${text}°` : `${text} ${unit}`;
+}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatNumber, parseQuantity, type QuantityKind } from '../../../src/lib/calculators/units';
+import { formatNumber, formatWithUnit, parseQuantity, type QuantityKind } from '../../../src/lib/calculators/units';
 
 /**
  * Unit conversions the trade uses. Sources: SI (1 min = 60 s, 1 h = 3600 s, 1 ms = 1e-3 s);
@@ -69,5 +69,15 @@ describe('formatNumber', () => {
     expect(formatNumber(0.000012346)).toBe('1.235e-5');
     expect(formatNumber(null)).toBe('—');
     expect(formatNumber(Number.NaN)).toBe('—');
+  });
+});
+
+describe('formatWithUnit', () => {
+  it('spaces units as SI does (a space before % and s), none before the degree sign, nothing after a missing value', () => {
+    expect(formatWithUnit(63.321, '°')).toBe('63.32°');
+    expect(formatWithUnit(4.2, '%')).toBe('4.2 %');
+    expect(formatWithUnit(12, 's')).toBe('12 s');
+    expect(formatWithUnit(null, 's')).toBe('—');
+    expect(formatWithUnit(1.5, '')).toBe('1.5');
   });
 });
