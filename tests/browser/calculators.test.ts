@@ -166,12 +166,35 @@ describe('calculator islands in Chromium', () => {
     await page.context().close();
   });
 
-  it('lists the published rules side by side and overlays their responses', async () => {
+  it('lists the published rules side by side, re-tunes for a new model and shows them in another form', async () => {
     const page = await openIsland(browser, page_url, 'silo-flow-rules');
     const rows = page.getByTestId('silo-flow-rules-table').locator('tbody tr');
     await expect.poll(() => rows.count()).toBeGreaterThanOrEqual(5);
     expect(await rows.locator('th').allTextContents()).toEqual(expect.arrayContaining([expect.stringContaining('SIMC'), expect.stringContaining('AMIGO')]));
+    const simcGain = () => page.getByTestId('silo-flow-rules-table').locator('tr[data-rule="simc"] td').nth(1).textContent();
+    // SIMC PI with τc = θ: Kc = τ/(K·2θ) = 6/(1.3·3) = 1.538 (Skogestad 2003); doubling θ halves it (×0.5).
+    expect(await simcGain()).toBe('1.538');
+    const theta = page.getByTestId('silo-flow-rules-theta-field');
+    await theta.fill('3');
+    await theta.press('Enter');
+    await expect.poll(simcGain).toBe('0.7692');
+    await page.getByTestId('silo-flow-rules-gain-unit').selectOption('pb');
+    await expect.poll(simcGain).toBe(String(Number((100 / 0.7692307692).toPrecision(4))));
     await page.context().close();
+  });
+
+  it('restores a rearranged block chain from a shared link', async () => {
+    const page = await openIsland(browser, page_url, 'steam-chain');
+    await page.getByTestId('steam-chain-remove-3').click();
+    await expect.poll(() => page.url()).toContain('steam-chain=');
+    const tf = await page.getByTestId('steam-chain-tf').getAttribute('data-tf');
+    expect(JSON.parse(tf!).delay).toBe(0);
+    const shared = page.url();
+    await page.context().close();
+    const colleague = await openIsland(browser, shared, 'steam-chain');
+    await expect.poll(() => colleague.getByTestId('steam-chain-tf').getAttribute('data-tf')).toBe(tf);
+    expect(await colleague.getByTestId('steam-chain-blocks').locator('li').count()).toBe(3);
+    await colleague.context().close();
   });
 
   it('saves screenshots of the calculators at desktop and phone widths', async () => {
