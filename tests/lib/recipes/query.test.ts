@@ -20,18 +20,20 @@ const slugs = (query: Record<string, string>, viewer: { email: string; role: str
   return selectRecipes(records, parsed.data, viewer, context).map((r) => r.slug);
 };
 
+const cases: { query: Record<string, string>; expected: string[]; what: string }[] = [
+  { query: {}, expected: ['a-level', 'b-flow'], what: 'published only, by title' },
+  { query: { status: 'retired' }, expected: ['c-old'], what: 'retired on request' },
+  { query: { loopType: 'level' }, expected: ['a-level'], what: 'one loop type' },
+  { query: { area: 'silos' }, expected: ['b-flow'], what: 'one area' },
+  { query: { minRating: '4' }, expected: ['b-flow'], what: 'rated at least 4 stars' },
+  { query: { sort: 'reviewed' }, expected: ['a-level', 'b-flow'], what: 'newest review first' },
+  { query: { sort: 'rating' }, expected: ['b-flow', 'a-level'], what: 'best rated first' },
+  { query: { q: 'averaging' }, expected: ['a-level'], what: 'words through the search index' },
+  { query: { status: 'draft' }, expected: [], what: 'no drafts for a reader who is not the owner' },
+];
+
 describe('selectRecipes', () => {
-  it.each([
-    { query: {}, expected: ['a-level', 'b-flow'], what: 'published only, by title' },
-    { query: { status: 'retired' }, expected: ['c-old'], what: 'retired on request' },
-    { query: { loopType: 'level' }, expected: ['a-level'], what: 'one loop type' },
-    { query: { area: 'silos' }, expected: ['b-flow'], what: 'one area' },
-    { query: { minRating: '4' }, expected: ['b-flow'], what: 'rated at least 4 stars' },
-    { query: { sort: 'reviewed' }, expected: ['a-level', 'b-flow'], what: 'newest review first' },
-    { query: { sort: 'rating' }, expected: ['b-flow', 'a-level'], what: 'best rated first' },
-    { query: { q: 'averaging' }, expected: ['a-level'], what: 'words through the search index' },
-    { query: { status: 'draft' }, expected: [], what: 'no drafts for a reader who is not the owner' },
-  ])('$what', ({ query, expected }) => {
+  it.each(cases)('$what', ({ query, expected }) => {
     expect(slugs(query, { email: 'reader@brindlewood.example', role: 'reader' })).toEqual(expected);
   });
 
