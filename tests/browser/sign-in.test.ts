@@ -51,6 +51,16 @@ describe('signing in through the form in Chromium', () => {
     await page.close();
   });
 
+  it('fits the sign-in page on a phone without sideways scrolling', async () => {
+    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    await page.goto(`${server.url}/sign-in`);
+    await hydrated(page, 'Sign in');
+    await page.getByTestId('demo-accounts').locator('summary').click();
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await page.screenshot({ path: artifactPath('sign-in-phone.png'), fullPage: true });
+    await page.close();
+  });
+
   it('lets an admin invite someone from the people page, who then sets a password and lands signed in', async () => {
     const page = await browser.newPage();
     const admin = demoAccount('admin');

@@ -1,17 +1,17 @@
-import { useState, type FormEvent } from 'react';
+import { useState, type SubmitEvent } from 'react';
 import { sendJson } from './send-json';
 import { buttonClass, Field, FormMessage, useHydrated } from './Field';
 
 /** Asks for a reset link; the answer is the same whether or not the address has an account. */
 export default function ForgotPasswordForm() {
-  const [email, setEmail] = useState('');
   const [busy, setBusy] = useState(false);
   const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
 
-  async function submit(event: FormEvent) {
+  async function submit(event: SubmitEvent<HTMLFormElement>) {
     event.preventDefault();
+    const email = String(new FormData(event.currentTarget).get('email') ?? '');
     setBusy(true);
     setError(null);
     setDone(null);
@@ -23,7 +23,7 @@ export default function ForgotPasswordForm() {
 
   return (
     <form method="post" onSubmit={submit} className="space-y-4" aria-busy={busy}>
-      <Field label="Work e-mail" type="email" name="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} />
+      <Field label="Work e-mail" type="email" name="email" autoComplete="username" required />
       <FormMessage error={error} done={done} />
       <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Sending…' : 'Send me a link'}</button>
     </form>

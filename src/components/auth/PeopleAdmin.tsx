@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useState, type SubmitEvent } from 'react';
 import type { Person } from '../../lib/auth/people';
 import { ROLE_LABELS, ROLES, type Role } from '../../lib/auth/roles';
 import { sendJson } from './send-json';
@@ -16,35 +16,36 @@ function RoleSelect({ value, onChange, label, disabled }: { value: Role; onChang
 }
 
 function InviteForm({ onInvited }: { onInvited(p: Person): void }) {
-  const [email, setEmail] = useState('');
-  const [name, setName] = useState('');
-  const [role, setRole] = useState<Role>('reader');
   const [busy, setBusy] = useState(false);
   const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState<string | null>(null);
 
-  async function submit(event: FormEvent) {
+  async function submit(event: SubmitEvent<HTMLFormElement>) {
     event.preventDefault();
+    const form = event.currentTarget;
+    const fields = new FormData(form);
     setBusy(true);
     setError(null);
     setDone(null);
-    const result = await sendJson<{ person: Person }>('/api/admin/invitations', { email, name, role });
+    const result = await sendJson<{ person: Person }>('/api/admin/invitations', { email: fields.get('email'), name: fields.get('name'), role: fields.get('role') });
     setBusy(false);
     if (!result.ok) return setError(result.message);
     onInvited(result.data.person);
     setDone(`Invitation sent to ${result.data.person.email}.`);
-    setEmail('');
-    setName('');
-    setRole('reader');
+    form.reset();
   }
 
   return (
     <form method="post" onSubmit={submit} className="grid gap-3 rounded-lg border border-rule bg-panel p-4 md:grid-cols-[1fr_1fr_auto_auto] md:items-end" aria-busy={busy} data-testid="invite-form">
-      <Field label="Name" name="name" required value={name} onChange={(e) => setName(e.target.value)} />
-      <Field label="Work e-mail" type="email" name="email" required value={email} onChange={(e) => setEmail(e.target.value)} />
+      <Field label="Name" name="name" required />
+      <Field label="Work e-mail" type="email" name="email" required />
       <label className="block text-sm font-semibold">Starts as
-        <div className="mt-1"><RoleSelect label="Role of the new person" value={role} onChange={setRole} /></div>
+        <div className="mt-1">
+          <select name="role" aria-label="Role of the new person" defaultValue="reader" className="rounded-md border border-rule bg-paper px-2 py-1">
+            {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+          </select>
+        </div>
       </label>
       <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Sending…' : 'Send invitation'}</button>
       <div className="md:col-span-4"><FormMessage error={error} done={done} /></div>

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useState, type SubmitEvent } from 'react';
 import { sendJson } from './send-json';
 import { buttonClass, Field, FormMessage, useHydrated } from './Field';
 
@@ -13,15 +13,16 @@ interface Props {
 
 /** Chooses a password from an e-mailed link (invitation or reset); an invitation then signs in. */
 export default function SetPasswordForm({ token, minLength, email }: Props) {
-  const [password, setPassword] = useState('');
-  const [again, setAgain] = useState('');
   const [busy, setBusy] = useState(false);
   const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
 
-  async function submit(event: FormEvent) {
+  async function submit(event: SubmitEvent<HTMLFormElement>) {
     event.preventDefault();
+    const fields = new FormData(event.currentTarget);
+    const password = String(fields.get('password') ?? '');
+    const again = String(fields.get('again') ?? '');
     if (password.length < minLength) return setError(`Use at least ${minLength} characters.`);
     if (password !== again) return setError('The two passwords differ; type the same one twice.');
     setBusy(true);
@@ -50,9 +51,8 @@ export default function SetPasswordForm({ token, minLength, email }: Props) {
   return (
     <form method="post" onSubmit={submit} className="space-y-4" aria-busy={busy}>
       <Field label="New password" type="password" name="password" autoComplete="new-password" required minLength={minLength}
-        hint={`At least ${minLength} characters; a short sentence is easy to remember and hard to guess.`}
-        value={password} onChange={(e) => setPassword(e.target.value)} />
-      <Field label="The same password again" type="password" name="again" autoComplete="new-password" required value={again} onChange={(e) => setAgain(e.target.value)} />
+        hint={`At least ${minLength} characters; a short sentence is easy to remember and hard to guess.`} />
+      <Field label="The same password again" type="password" name="again" autoComplete="new-password" required />
       <FormMessage error={error} />
       <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Saving…' : 'Set my password'}</button>
     </form>

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useState, type SubmitEvent } from 'react';
 import { sendJson } from './send-json';
 import { buttonClass, Field, FormMessage, useHydrated } from './Field';
 
@@ -12,17 +12,17 @@ function signInMessage(status: number, fallback: string): string {
 
 /** E-mail and password; on success goes to `next` (a path on this site). */
 export default function SignInForm({ next }: { next: string }) {
-  const [email, setEmail] = useState('');
-  const [password, setPassword] = useState('');
   const [busy, setBusy] = useState(false);
   const ready = useHydrated();
   const [error, setError] = useState<string | null>(null);
 
-  async function submit(event: FormEvent) {
+  async function submit(event: SubmitEvent<HTMLFormElement>) {
     event.preventDefault();
+    // Read from the form itself: what was typed before hydration is kept.
+    const fields = new FormData(event.currentTarget);
     setBusy(true);
     setError(null);
-    const result = await sendJson('/api/auth/sign-in/email', { email: email.trim(), password });
+    const result = await sendJson('/api/auth/sign-in/email', { email: String(fields.get('email') ?? '').trim(), password: String(fields.get('password') ?? '') });
     if (result.ok) {
       window.location.assign(next);
       return;
@@ -33,8 +33,8 @@ export default function SignInForm({ next }: { next: string }) {
 
   return (
     <form method="post" onSubmit={submit} className="space-y-4" data-testid="sign-in-form" aria-busy={busy}>
-      <Field label="Work e-mail" type="email" name="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} />
-      <Field label="Password" type="password" name="password" autoComplete="current-password" required value={password} onChange={(e) => setPassword(e.target.value)} />
+      <Field label="Work e-mail" type="email" name="email" autoComplete="username" required />
+      <Field label="Password" type="password" name="password" autoComplete="current-password" required />
       <FormMessage error={error} />
       <div className="flex items-center gap-4">
         <button type="submit" className={buttonClass} disabled={busy || !ready}>{busy ? 'Signing in…' : 'Sign in'}</button>

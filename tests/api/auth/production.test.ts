@@ -48,6 +48,9 @@ describe('production mode', () => {
     server = await startServer({ env: SETTINGS });
     expect((await fetch(`${server.url}/api/health`)).status).toBe(200);
     expect((await fetch(`${server.url}/`, { redirect: 'manual' })).status).toBe(302);
+    const signIn = await (await fetch(`${server.url}/sign-in`)).text();
+    expect(signIn).toContain('Sign in to the recipe book');
+    expect(signIn).not.toContain('Demo accounts');
   });
 
   it('stops `prepare` (run by npm start) with the reason', () => {

@@ -54,7 +54,10 @@ describe('signing in and route protection', () => {
     expect(res.headers.get('location')).toBe('/sign-in?next=%2Fadmin%2Fpeople%3Ftab%3D1');
     const page = await fetch(`${server.url}/sign-in`);
     expect(page.status).toBe(200);
-    expect(await page.text()).toContain('Sign in to the recipe book');
+    const html = await page.text();
+    expect(html).toContain('Sign in to the recipe book');
+    expect(html).toContain('Demo accounts at Brindlewood Creamery');
+    expect(html).toContain(demoAccount('curator').email);
   });
 
   it('leaves the health check, the calculation routes and the API description open without a session', async () => {
