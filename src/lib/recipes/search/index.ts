@@ -40,9 +40,18 @@ const SEARCHABLE = new Set<RecipeStatus>(['published', 'retired']);
 /** Field boosts: a word in the title or a loop tag says more than one in the body. */
 const BOOST = { title: 4, loopTags: 3, tags: 2, summary: 1.5, body: 1 };
 
-/** Typos are forgiven in words of five letters or more; short words and loop tags must match. */
+/**
+ * Typos forgiven: one edit in words of five to eight letters, two in longer ones; shorter words
+ * and loop tags must match (a wider net costs time on a large index and finds noise).
+ */
 function fuzziness(term: string): number | false {
-  return term.length >= 5 && !/\d/.test(term) ? 0.2 : false;
+  if (term.length < 5 || /\d/.test(term)) return false;
+  return term.length <= 8 ? 1 : 2;
+}
+
+/** The start of a word is enough from three letters on. */
+function prefixing(term: string): boolean {
+  return term.length >= 3;
 }
 
 /** An ISA-5.1 loop tag such as TIC-210 or FIC-101A: kept as one word. */
@@ -80,20 +89,28 @@ function toDocument(r: RecipeRecord): SearchDocument {
 export function createSearchIndex(records: RecipeRecord[] = []) {
   const mini = new MiniSearch<SearchDocument>({
     fields: ['title', 'summary', 'tags', 'loopTags', 'body'],
-    storeFields: ['title', 'summary', 'body', 'status', 'loopType'],
+    // Only what the filter needs is stored in the index: MiniSearch copies stored fields into
+    // every hit, and a broad query can hit every recipe. Texts for excerpts are kept beside it.
+    storeFields: ['status'],
     tokenize,
-    searchOptions: { boost: BOOST, prefix: true, fuzzy: fuzziness },
+    searchOptions: { boost: BOOST, prefix: prefixing, fuzzy: fuzziness, maxFuzzy: 2 },
   });
 
   /** Puts a recipe in the index, replacing its older version; drafts and recipes in review leave it. */
+  const texts = new Map<string, SearchDocument>();
+
   function addOrReplace(record: RecipeRecord): void {
-    if (mini.has(record.slug)) mini.discard(record.slug);
-    if (SEARCHABLE.has(record.data.status)) mini.add(toDocument(record));
+    remove(record.slug);
+    if (!SEARCHABLE.has(record.data.status)) return;
+    const doc = toDocument(record);
+    mini.add(doc);
+    texts.set(doc.id, doc);
   }
 
   /** Takes a recipe out of the index; no-op when it is not there. */
   function remove(slug: string): void {
     if (mini.has(slug)) mini.discard(slug);
+    texts.delete(slug);
   }
 
   function search(query: string, options: SearchOptions = {}): SearchHit[] {
@@ -102,15 +119,16 @@ export function createSearchIndex(records: RecipeRecord[] = []) {
     const allowRetired = options.includeRetired ?? false;
     const results = mini.search(q, { filter: (r) => r.status === 'published' || (allowRetired && r.status === 'retired') });
     return results.slice(0, options.limit ?? 50).map((r) => {
+      const doc = texts.get(String(r.id))!;
       const inSummary = r.terms.some((t) => r.match[t]?.includes('summary'));
-      const source: string = inSummary || !r.terms.some((t) => r.match[t]?.includes('body')) ? r.summary : r.body;
+      const source = inSummary || !r.terms.some((t) => r.match[t]?.includes('body')) ? doc.summary : doc.body;
       return {
-        slug: String(r.id),
-        title: r.title,
+        slug: doc.id,
+        title: doc.title,
         score: r.score,
-        status: r.status,
-        loopType: r.loopType,
-        titleSegments: highlight(r.title, r.terms),
+        status: doc.status,
+        loopType: doc.loopType,
+        titleSegments: highlight(doc.title, r.terms),
         excerptSegments: highlight(excerpt(source, r.terms), r.terms),
       };
     });
