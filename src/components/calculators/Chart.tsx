@@ -15,6 +15,8 @@ export interface ChartSeries {
   unit?: string;
   /** Draw the samples as dots without a line (a single point such as −1 on a Nyquist plot). */
   dots?: boolean;
+  /** Hold each value until the next sample (a sampled signal through a zero-order hold). */
+  stepped?: boolean;
 }
 
 /** Bounds an automatic axis may not pass (the phase of a long dead time, a Nyquist curve running off to infinity). */
@@ -155,6 +157,7 @@ export default function Chart(props: ChartProps) {
             dash: s.dash,
             points: s.dots ? { show: true, size: 8, fill: palette[s.color] } : { show: false },
             ...(s.dots ? { paths: () => null } : {}),
+            ...(s.stepped ? { paths: uPlot.paths.stepped!({ align: 1 }) } : {}),
             value: (_u: uPlot, v: number | null) => readout(v, s.unit),
             ...(xy ? { facets: [{ scale: 'x', auto: true }, { scale: 'y', auto: true }] } : {}),
           })),

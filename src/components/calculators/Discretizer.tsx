@@ -1,6 +1,7 @@
 import { useMemo, useRef } from 'react';
 import type uPlot from 'uplot';
 import { z } from 'zod';
+import { analyze } from '../../lib/control/analyze';
 import { discretize } from '../../lib/control/discretize';
 import { discretePid } from '../../lib/control/discrete-pid';
 import type { PidControllerInput } from '../../lib/schemas/controller';
@@ -35,8 +36,9 @@ const StateSchema = z.object({
 });
 type State = z.infer<typeof StateSchema>;
 
-/** How many samples the step chart shows. */
-const SAMPLES = 60;
+/** The step chart shows the response settle, in this many samples at most (and at least the fewer). */
+const MAX_SAMPLES = 400;
+const MIN_SAMPLES = 20;
 
 function coefficientList(values: readonly number[]): string {
   return values.map((v) => formatNumber(v, 6)).join(', ');
@@ -51,8 +53,13 @@ export default function Discretizer({ tf, ts, controller, id = 'discretizer', ti
   const result = useMemo(() => {
     try {
       const g = discretize({ tf, ts: state.ts, method: state.method });
-      const step = discreteStep(g, SAMPLES);
-      return { ok: true as const, g, step, t: step.map((_, k) => k * state.ts) };
+      const settles = analyze({ plant: tf, analyses: { step: { points: 101 } } }).step!.tFinal;
+      const samples = Math.min(MAX_SAMPLES, Math.max(MIN_SAMPLES, Math.ceil(settles / state.ts) + 1));
+      const step = discreteStep(g, samples);
+      const t = step.map((_, k) => k * state.ts);
+      // The continuous response at the same instants: a zero-order hold matches it exactly there.
+      const continuous = analyze({ plant: tf, analyses: { step: { tFinal: t[t.length - 1]!, points: samples } } }).step!.y;
+      return { ok: true as const, g, step, t, continuous };
     } catch (error) {
       return { ok: false as const, message: describeError(error) };
     }
@@ -73,7 +80,7 @@ export default function Discretizer({ tf, ts, controller, id = 'discretizer', ti
     update(change);
   };
 
-  const data = useMemo<uPlot.AlignedData>(() => (result.ok ? [result.t, result.step] : [[], []]), [result]);
+  const data = useMemo<uPlot.AlignedData>(() => (result.ok ? [result.t, result.continuous, result.step] : [[], [], []]), [result]);
   const text = () => {
     const lines = [`Sample time ts = ${state.ts} s, ${state.method === 'zoh' ? 'zero-order hold' : 'Tustin'}`];
     if (result.ok) {
@@ -142,7 +149,10 @@ export default function Discretizer({ tf, ts, controller, id = 'discretizer', ti
             title={`${title}: discrete step response`}
             xLabel="t (s)"
             yLabel="y[k]"
-            series={[{ label: 'y[k], unit step', color: 'copper' }]}
+            series={[
+              { label: 'y(t) of G(s) at the samples', color: 'slate', dash: [5, 4] },
+              { label: 'y[k] of G(z), held', color: 'copper', stepped: true },
+            ]}
             data={data}
             height={200}
             onChart={(u) => (chartRef.current = u)}
@@ -155,6 +165,7 @@ export default function Discretizer({ tf, ts, controller, id = 'discretizer', ti
           { header: 'k', values: result.ok ? result.step.map((_, k) => k) : [] },
           { header: 't (s)', values: result.ok ? result.t : [] },
           { header: 'y[k]', values: result.ok ? result.step : [] },
+          { header: 'y(t) continuous', values: result.ok ? result.continuous : [] },
         ]}
         charts={() => [{ title, chart: chartRef.current }]}
         copy={text}
