@@ -35,7 +35,7 @@ export type LoopInput = 'setpoint' | 'load';
 export interface ClosedLoopOptions {
   /** Least number of internal steps over the horizon; default 250. */
   minSteps?: number;
-  /** Most internal steps over the horizon; default 200 000. */
+  /** Most internal steps over the horizon; default 50 000. */
   maxSteps?: number;
 }
 
@@ -43,7 +43,7 @@ export interface ClosedLoopOptions {
 function internalStep(span: number, theta: number, fastest: number, options: ClosedLoopOptions): number {
   let h = span / (options.minSteps ?? 250);
   if (fastest > 0) h = Math.min(h, 1 / fastest);
-  h = Math.max(h, span / (options.maxSteps ?? 200000));
+  h = Math.max(h, span / (options.maxSteps ?? 50000));
   if (theta >= h) h = theta / Math.ceil(theta / h - 1e-9);
   return h;
 }

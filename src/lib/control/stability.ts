@@ -124,8 +124,10 @@ function trackArgument(m: FactoredModel, a: number, b: number, scan: LoopScan | 
   const stepTo = (w1: number, depth: number, known?: Complex): void => {
     const next = known ?? onePlusL(m, w1);
     let turn = Math.atan2(prev.re * next.im - prev.im * next.re, prev.re * next.re + prev.im * next.im);
-    // The dead time alone turns L by w·θ: never step further than a fraction of a turn of it.
-    const delayTurn = (w1 - prevW) * m.delay;
+    // The dead time alone turns L by w·θ: never step further than a fraction of a turn of it —
+    // unless |L| is small at both ends: then 1 + L stays near 1 and cannot circle the origin.
+    const small = Math.abs(prev.re - 1) + Math.abs(prev.im) < 0.6 && Math.abs(next.re - 1) + Math.abs(next.im) < 0.6;
+    const delayTurn = small ? 0 : (w1 - prevW) * m.delay;
     if ((Math.abs(turn) > maxTurn || delayTurn > maxTurn) && depth < 40) {
       const mid = Math.sqrt(prevW * w1);
       stepTo(mid, depth + 1);
