@@ -114,7 +114,7 @@ export default function FileStep({ areas, onUploaded }: FileStepProps) {
               </tbody>
             </table>
           </div>
-          {preview.issueCount > 0 && <Problem failure={new ApiFailure(`${preview.issueCount} rows are malformed:`, 400, null, preview.issues)} />}
+          {preview.issueCount > 0 && <Problem failure={new ApiFailure(preview.issueCount === 1 ? 'One row is malformed; fix it in the file before uploading:' : `${preview.issueCount} rows are malformed; fix them in the file before uploading:`, 400, null, preview.issues)} />}
           <MappingForm columns={preview.columns} header={preview.header} mapping={mapping} onChange={setMapping} />
           <button type="button" className="calc-button mt-3" disabled={busy || !tag} onClick={upload} data-testid="fd-upload">
             Upload and plot
@@ -130,7 +130,7 @@ export function Problem({ failure }: { failure: ApiFailure }) {
   return (
     <div className="calc-problem mt-2" role="alert" data-testid="fd-problem">
       <p>{failure.message}</p>
-      {failure.issues.length > 1 && (
+      {failure.issues.length > 0 && !(failure.issues.length === 1 && failure.message.startsWith(failure.issues[0].message.replace(/\.$/, ''))) && (
         <ul className="ml-5 list-disc">
           {failure.issues.map((i, n) => <li key={n}>{i.message}</li>)}
         </ul>

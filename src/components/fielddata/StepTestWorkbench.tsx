@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import '../calculators/calculators.css';
 import EvidenceStep from './EvidenceStep';
 import FileStep from './FileStep';
@@ -18,15 +18,17 @@ export default function StepTestWorkbench({ areas, recipes, loopTypes }: StepTes
   const [fit, setFit] = useState<FitView | null>(null);
   const [answer, setAnswer] = useState<FitAnswer | null>(null);
   const [tuning, setTuning] = useState<TunedChoice | null>(null);
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
 
   return (
-    <div data-testid="fd-workbench" data-ready="true">
+    <div data-testid="fd-workbench" data-ready={ready ? 'true' : 'false'}>
       <FileStep areas={areas} onUploaded={(id) => { setStepTestId(id); setFit(null); setTuning(null); }} />
       {stepTestId !== null && (
         <FitStep key={stepTestId} stepTestId={stepTestId} loopTypes={loopTypes} onChosen={(f, a) => { setFit(f); setAnswer(a); }} />
       )}
       {fit && answer && (
-        <TuningStep model={fit.model} pvUnit={answer.stepTest.mapping.pv.unit} coUnit={answer.stepTest.mapping.co?.unit ?? '%'} onChange={setTuning} />
+        <TuningStep key={fit.id} model={fit.model} fitId={fit.id} pvUnit={answer.stepTest.mapping.pv.unit} coUnit={answer.stepTest.mapping.co?.unit ?? '%'} onChange={setTuning} />
       )}
       {fit && answer && tuning && stepTestId !== null && (
         <EvidenceStep stepTestId={stepTestId} fitId={fit.id} tuning={tuning} recipes={recipes} matches={fit.matches}

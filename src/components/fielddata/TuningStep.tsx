@@ -1,8 +1,10 @@
 import { useEffect, useState } from 'react';
-import { ApiFailure, fmt, postJson } from './api';
+import { ApiFailure, fmt } from './api';
+import { applicableRules, designController } from '../../lib/control/tuning/rules';
 import { Problem } from './FileStep';
 import type { ProcessModel } from './types';
 import type { TuningSetting } from '../../lib/schemas/tuning-setting';
+import TuningComparison from '../calculators/TuningComparison';
 
 export interface TunedChoice {
   rule: string | null;
@@ -12,18 +14,41 @@ export interface TunedChoice {
 
 export interface TuningStepProps {
   model: ProcessModel;
+  /** The chosen fit (names the comparison's URL state, one per model). */
+  fitId: number;
   /** Unit of the process value, for the gain unit label (output % per PV unit). */
   pvUnit: string;
   coUnit: string;
   onChange(choice: TunedChoice | null): void;
 }
 
-type Tuned = { rule: string; source: string; controller: { form: 'ideal' | 'series'; kc: number; ti: number; td: number } };
+type Tuned = { rule: string; source: string; via: string | null; controller: { form: 'ideal' | 'series'; kc: number; ti: number; td: number } };
 
-const RULES = ['simc', 'lambda', 'imc', 'amigo', 'cohen-coon', 'zn-open-loop'] as const;
+/**
+ * Every published rule that tunes this model for the controller, computed here by the engine's
+ * rules (the same code as POST /api/v1/calc/tune); an SOPDT model is also offered to the FOPDT
+ * rules through Skogestad's half rule, as the comparison above does.
+ */
+function tunedRows(model: ProcessModel, controller: 'pi' | 'pid'): Tuned[] {
+  const out: Tuned[] = [];
+  const attempt = (m: ProcessModel, via: string | null) => {
+    for (const rule of applicableRules(m.type, controller)) {
+      if (out.some((r) => r.rule === rule.id)) continue;
+      try {
+        const r = designController(m, rule.id, controller);
+        out.push({ rule: r.rule, source: r.source, via, controller: { form: r.controller.form, kc: r.controller.kc, ti: r.controller.ti, td: r.controller.td } });
+      } catch {
+        // a rule that gives no finite settings for this model (e.g. θ = 0) is left out
+      }
+    }
+  };
+  attempt(model, null);
+  if (model.type === 'sopdt') attempt({ type: 'fopdt', k: model.k, tau: model.tau1 + model.tau2 / 2, theta: model.theta + model.tau2 / 2 }, 'half-rule FOPDT');
+  return out;
+}
 
 /** The tuning rules that apply to the chosen model, one picked and adjusted to the controller's units. */
-export default function TuningStep({ model, pvUnit, coUnit, onChange }: TuningStepProps) {
+export default function TuningStep({ model, fitId, pvUnit, coUnit, onChange }: TuningStepProps) {
   const [controller, setController] = useState<'pi' | 'pid'>('pi');
   const [rows, setRows] = useState<Tuned[]>([]);
   const [picked, setPicked] = useState<string | null>(null);
@@ -32,24 +57,15 @@ export default function TuningStep({ model, pvUnit, coUnit, onChange }: TuningSt
   const gainUnit = `${coUnit || '%'}/${pvUnit || 'PV'}`;
 
   useEffect(() => {
-    let live = true;
     setFailure(null);
-    Promise.all(
-      RULES.map((rule) => postJson<Tuned>('/api/v1/calc/tune', { model, rule, controller }).catch((e: unknown) => (e instanceof ApiFailure && e.status === 400 ? null : Promise.reject(e)))),
-    ).then((all) => {
-      if (!live) return;
-      const ok = all.filter((r): r is Tuned => r !== null);
-      setRows(ok);
-      if (ok[0]) pick(ok[0], 's');
-      else {
-        setPicked(null);
-        setSetting(null);
-        onChange(null);
-      }
-    }, (e) => live && setFailure(e as ApiFailure));
-    return () => {
-      live = false;
-    };
+    const ok = tunedRows(model, controller);
+    setRows(ok);
+    if (ok[0]) pick(ok[0], 's');
+    else {
+      setPicked(null);
+      setSetting(null);
+      onChange(null);
+    }
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [JSON.stringify(model), controller]);
 
@@ -94,14 +110,16 @@ export default function TuningStep({ model, pvUnit, coUnit, onChange }: TuningSt
         targets; and follow your site's procedures, local codes and licensed engineering practice.
       </div>
       {failure && <Problem failure={failure} />}
-      <div className="calc-scroll mt-3">
+      <TuningComparison key={`${fitId}-${controller}`} model={model} controller={controller} id={`fit-${fitId}-${controller}`} title="Tuning rules on the fitted model" />
+      <h3 className="mt-3 font-semibold">Pick the settings to keep</h3>
+      <div className="calc-scroll mt-1">
         <table className="calc-table" data-testid="fd-rules">
           <thead><tr><th></th><th>rule</th><th>form</th><th>Kc</th><th>Ti (s)</th><th>Td (s)</th><th>source</th></tr></thead>
           <tbody>
             {rows.map((r) => (
               <tr key={r.rule}>
                 <td><input type="radio" name="fd-rule" checked={picked === r.rule} onChange={() => pick(r, setting?.timeUnit ?? 's')} aria-label={`Use ${r.rule}`} data-testid={`fd-rule-${r.rule}`} /></td>
-                <td>{r.rule}</td>
+                <td>{r.rule}{r.via ? <span className="calc-note"> (on the {r.via})</span> : null}</td>
                 <td>{r.controller.form}</td>
                 <td className="num">{fmt(r.controller.kc)}</td>
                 <td className="num">{fmt(r.controller.ti)}</td>
