@@ -8,6 +8,7 @@ import { pidToTransferFunction } from './pid';
 import { chain } from './connect';
 import { factor, autoGrid, frequencyResponse, timeScales, type FactoredModel, type FrequencyResponse } from './frequency';
 import { margins } from './margins';
+import { loopScan } from './scan-grid';
 import { closedLoopStable, characteristicPolynomial, openPathStable } from './stability';
 import { sortRoots, roots } from './roots';
 import { stepResponse } from './simulate';
@@ -99,7 +100,15 @@ function finalValueOf(s: Setup, input: LoopInput, stable: boolean): number | nul
 
 function simulateStep(s: Setup, t: number[], input: LoopInput): number[] {
   if (!s.controller) return stepResponse(chain([s.plant, s.sensor]), t).y;
-  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input).y;
+  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input, { loopBandwidth: loopBandwidth(s.loop) }).y;
+}
+
+/** Highest scanned frequency where |L| ≥ ½ (rad/s); 0 when there is none. */
+function loopBandwidth(m: FactoredModel): number {
+  if (m.delay === 0) return 0;
+  const scan = loopScan(m);
+  for (let i = scan.w.length - 1; i >= 0; i--) if (scan.mag[i] >= 0.5) return scan.w[Math.min(i + 1, scan.w.length - 1)];
+  return 0;
 }
 
 function estimatedHorizon(s: Setup, input: LoopInput): number {

@@ -28,21 +28,29 @@ export interface Loop {
 export type LoopInput = 'setpoint' | 'load';
 
 /**
- * Options for the fixed-step simulation. The step is at most tFinal/minSteps and at most the
- * fastest time constant of the loop's blocks (but no more than maxSteps steps in all), and it
- * divides the loop dead time exactly so that delayed samples fall on stored ones.
+ * Options for the fixed-step simulation. The step is at most tFinal/minSteps, the fastest time
+ * constant of the loop's blocks, θ/4 and 0.5/loopBandwidth (but no more than maxSteps steps in
+ * all), and it divides the loop dead time exactly so that delayed samples fall on stored ones.
  */
 export interface ClosedLoopOptions {
   /** Least number of internal steps over the horizon; default 250. */
   minSteps?: number;
   /** Most internal steps over the horizon; default 50 000. */
   maxSteps?: number;
+  /**
+   * Highest frequency (rad/s) at which the loop still has gain (|L| ≥ ½, e.g. from the margin
+   * scan); the step is kept at or below 0.5/that so closed-loop oscillations are resolved.
+   */
+  loopBandwidth?: number;
 }
 
 /** Internal step: see ClosedLoopOptions. */
 function internalStep(span: number, theta: number, fastest: number, options: ClosedLoopOptions): number {
   let h = span / (options.minSteps ?? 250);
   if (fastest > 0) h = Math.min(h, 1 / fastest);
+  // Oscillations a dead time allows have periods of a few θ: resolve them too.
+  h = Math.min(h, theta / 4);
+  if (options.loopBandwidth && options.loopBandwidth > 0) h = Math.min(h, 0.5 / options.loopBandwidth);
   h = Math.max(h, span / (options.maxSteps ?? 50000));
   if (theta >= h) h = theta / Math.ceil(theta / h - 1e-9);
   return h;

@@ -80,3 +80,33 @@ describe('rootInfo', () => {
     expect(rootInfo({ re: 0, im: 0 }).damping).toBeNull();
   });
 });
+
+describe('closedLoopStable (cross-check with simulation)', () => {
+  it('agrees with long exact-delay simulations on a seeded sweep of PI/PID loops with dead time', async () => {
+    const { analyze } = await import('../../../src/lib/control/analyze');
+    let seed = 2024;
+    const rnd = () => ((seed = (seed * 1103515245 + 12345) % 2147483648), seed / 2147483648);
+    const lg = (a: number, b: number) => 10 ** (a + (b - a) * rnd());
+    let compared = 0;
+    for (let i = 0; i < 40; i++) {
+      const plant = Array.from({ length: 1 + Math.floor(rnd() * 3) }, () => ({ num: [lg(-0.5, 0.5)], den: [lg(-1, 1), rnd() < 0.1 ? -1 : 1], delay: lg(-1, 1) }));
+      const controller = { form: 'ideal' as const, kc: lg(-1.5, 0.5), ti: lg(0, 1.5), td: rnd() < 0.5 ? 0 : lg(-1, 0) };
+      const stableByNyquist = analyze({ plant, controller, analyses: { poles: true } }).stable;
+      let y: number[];
+      try {
+        y = analyze({ plant, controller, analyses: { step: { tFinal: 400, points: 4001 } } }).step!.y;
+      } catch {
+        expect(stableByNyquist).toBe(false); // the response overflowed: clearly unstable
+        compared++;
+        continue;
+      }
+      const tail = Math.max(...y.slice(3000).map((v) => Math.abs(v - 1)));
+      const middle = Math.max(...y.slice(1000, 2000).map((v) => Math.abs(v - 1)));
+      if (tail < 1e-3) expect(stableByNyquist).toBe(true);
+      else if (tail > middle && tail > 0.05) expect(stableByNyquist).toBe(false);
+      else continue; // too close to the stability limit to call from 400 s of response
+      compared++;
+    }
+    expect(compared).toBeGreaterThan(25);
+  });
+});
