@@ -1,3 +1,4 @@
+import './editorial.css';
 import { useEffect, useRef, useState } from 'react';
 import { callApi, type ApiError } from './api';
 import ControllerFields, { type ControllerValue } from './ControllerFields';

@@ -1,3 +1,4 @@
+import './editorial.css';
 import { useState } from 'react';
 import { callApi, type ApiError } from './api';
 

@@ -11,9 +11,12 @@ export function slugFromTitle(title: string): string {
   return base || 'recipe';
 }
 
+/** Slugs that would hide a page of the site under /recipes/. */
+const RESERVED = new Set(['new']);
+
 /** The first of `base`, `base-2`, `base-3`, … that `taken` says is free. */
 export async function uniqueSlug(base: string, taken: (slug: string) => Promise<boolean>): Promise<string> {
-  if (!(await taken(base))) return base;
+  if (!RESERVED.has(base) && !(await taken(base))) return base;
   for (let n = 2; ; n++) {
     const candidate = `${base}-${n}`;
     if (!(await taken(candidate))) return candidate;
