@@ -1,5 +1,6 @@
 import { createElement, type ComponentType } from 'react';
 import { createRoot, type Root } from 'react-dom/client';
+import { ALLOWED_COMPONENT_NAMES } from '../../lib/recipes/authored-mdx/component-names';
 
 /**
  * Brings the calculators of an authored recipe to life: every `[data-island]` placeholder the
@@ -13,7 +14,7 @@ async function hydrate(el: HTMLElement): Promise<void> {
   const name = el.dataset.island ?? '';
   const load = calculators[`../calculators/${name}.tsx`];
   const fallback = el.querySelector('.island-fallback');
-  if (!/^[A-Z][A-Za-z]+$/.test(name) || !load) {
+  if (!(ALLOWED_COMPONENT_NAMES as readonly string[]).includes(name) || !load) {
     if (fallback) fallback.textContent = `The ${name} calculator is not available on this site yet.`;
     return;
   }

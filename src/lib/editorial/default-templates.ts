@@ -33,7 +33,7 @@ design data or a vendor sheet. Write the model, e.g. $G(s) = \\dfrac{K e^{-\\the
 
 The controller structure and form, the rule the tuning came from, and what was changed after.
 
-<TuningComparison model=${s.model} controller="pi" />
+<FrequencyView model=${s.model} controller=${s.controller} title="Margins of the loop" />
 
 ## Commissioning steps
 

@@ -9,7 +9,7 @@ describe('defaultTemplate', () => {
     const result = compileBody(body);
     expect(result.ok).toBe(true);
     if (!result.ok) return;
-    expect(result.islands.map((i) => i.name)).toEqual(['LoopResponse', 'TuningComparison']);
+    expect(result.islands.map((i) => i.name)).toEqual(['LoopResponse', 'FrequencyView']);
     expect(body).toContain('Test in manual first');
     expect(body).toMatch(/## Commissioning steps/);
   });

@@ -1,31 +1,39 @@
 import { z } from 'zod';
-import { ClaimSchema, PidControllerSchema, ProcessModelSchema, TransferFunctionSchema } from '../../schemas';
+import { BlockSchema, ClaimSchema, PidControllerSchema, ProcessModelSchema, TransferFunctionSchema } from '../../schemas';
+import type { AllowedComponentName } from './component-names';
+
+export { ALLOWED_COMPONENT_NAMES, type AllowedComponentName } from './component-names';
 
 /** A short caption shown above a calculator. */
 const Caption = z.string().trim().min(1).max(120);
+/** Names a calculator's URL parameter when a page has several of one kind. */
+const InstanceId = z.string().regex(/^[a-z][a-z0-9-]{0,39}$/, 'An id is lower-case letters, digits and hyphens.');
 
 /**
- * The only elements an authored body may use: the calculator islands, each with a strict props
- * schema (unknown props are refused). Add a component here and in the client hydrator's map
- * (src/components/authored/hydrate-islands.ts) to allow it; DEVELOPERS.md, "Editorial", says how.
+ * The only elements an authored body may use: the calculator islands (src/components/calculators),
+ * each with a strict props schema mirroring the island's props (unknown props are refused).
+ * DEVELOPERS.md, "Editorial", says how to allow another one.
  */
-export const ALLOWED_COMPONENTS = {
+export const ALLOWED_COMPONENTS: Record<AllowedComponentName, z.ZodType> = {
   LoopResponse: z.strictObject({
     /** Process model the loop closes around. */
     model: ProcessModelSchema,
     /** Controller tuning shown at first. */
     controller: PidControllerSchema,
-    /** Performance claims shown pass/fail. */
-    claims: z.array(ClaimSchema).max(20).optional(),
     /** Measurement path H(s). */
     sensor: TransferFunctionSchema.optional(),
-    /** Caption above the plot. */
+    /** Performance claims shown pass/fail. */
+    claims: z.array(ClaimSchema).max(20).optional(),
+    /** Horizon of the step responses, s. */
+    tFinal: z.number().positive().max(1e6).optional(),
+    id: InstanceId.optional(),
     title: Caption.optional(),
   }),
   FrequencyView: z.strictObject({
     model: ProcessModelSchema,
-    controller: PidControllerSchema.optional(),
+    controller: PidControllerSchema,
     sensor: TransferFunctionSchema.optional(),
+    id: InstanceId.optional(),
     title: Caption.optional(),
   }),
   TuningComparison: z.strictObject({
@@ -34,15 +42,20 @@ export const ALLOWED_COMPONENTS = {
     controller: z.enum(['pi', 'pid']).optional(),
     /** Rules to compare (the contract's rule names). */
     rules: z.array(z.enum(['simc', 'lambda', 'imc', 'zn-open-loop', 'cohen-coon', 'amigo'])).max(10).optional(),
+    id: InstanceId.optional(),
     title: Caption.optional(),
   }),
   BlockChain: z.strictObject({
-    /** Blocks in series, actuator to sensor, each a transfer function. */
-    blocks: z.array(TransferFunctionSchema.extend({ label: Caption.optional() }).strict()).min(1).max(12),
+    /** The forward path in signal order (actuator → process → …). */
+    blocks: z.array(BlockSchema).min(1).max(12),
+    /** The measurement block. */
+    sensor: BlockSchema.optional(),
+    id: InstanceId.optional(),
     title: Caption.optional(),
   }),
   PidConverter: z.strictObject({
     controller: PidControllerSchema,
+    id: InstanceId.optional(),
     title: Caption.optional(),
   }),
   Discretizer: z.strictObject({
@@ -50,14 +63,12 @@ export const ALLOWED_COMPONENTS = {
     tf: TransferFunctionSchema,
     /** Sample time, s. */
     ts: z.number().positive(),
-    method: z.enum(['zoh', 'tustin']).optional(),
+    /** A PID to print as a difference equation. */
+    controller: PidControllerSchema.optional(),
+    id: InstanceId.optional(),
     title: Caption.optional(),
   }),
-} as const;
-
-export type AllowedComponentName = keyof typeof ALLOWED_COMPONENTS;
-
-export const ALLOWED_COMPONENT_NAMES = Object.keys(ALLOWED_COMPONENTS) as AllowedComponentName[];
+};
 
 /** Whether `name` is one of the calculator islands a body may use. */
 export function isAllowedComponent(name: string | null | undefined): name is AllowedComponentName {
