@@ -5,5 +5,5 @@ import { saveRecipe } from '../save';
 import { serverContext } from '../server-context';
 
 /** PUT /api/v1/recipes/{slug} (its owner, or curator+): `{ baseRevision, ...fields }` → the recipe at its new revision. */
-export const PUT: APIRoute = ({ params, request, locals }) =>
+export const saveRecipeRoute: APIRoute = ({ params, request, locals }) =>
   editorialRoute(locals, async (actor) => json(await saveRecipe(serverContext(request), actor, params.slug!, await bodyOf(request, UpdateRecipeSchema))));
