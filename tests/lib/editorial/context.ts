@@ -20,7 +20,9 @@ export async function testContext(fileRecipes: Record<string, FileRecipeRef> = {
   const ctx: EditorialContext = {
     knex: db.knex,
     now: () => new Date((tick += 1000)).toISOString(),
-    fileRecipe: (slug) => fileRecipes[slug] ?? null,
+    // Reads the database like the real library does, so an operation that looks a file recipe up
+    // inside its transaction (one connection) would hang here too.
+    fileRecipe: async (slug) => (await db.knex.raw('select 1'), fileRecipes[slug] ?? null),
     siteUrl: 'http://loopwright.test',
     sendMail: async (m) => void mail.push(...m),
     onPublishedChange: (slug) => void indexed.push(slug),
