@@ -1,4 +1,4 @@
-import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createRecipe } from '../../../src/lib/editorial/create';
 import { fieldNotes, rateRecipe } from '../../../src/lib/editorial/ratings';
 import { setWatching } from '../../../src/lib/editorial/watching';
@@ -6,6 +6,9 @@ import { stopCompileWorker } from '../../../src/lib/recipes/authored-mdx/compile
 import { DRAFT, PEOPLE, testContext } from './context';
 
 type T = Awaited<ReturnType<typeof testContext>>;
+
+// The first compile starts the worker, which takes seconds on a busy machine.
+vi.setConfig({ testTimeout: 30_000 });
 
 describe('rateRecipe', () => {
   let t: T;

@@ -1,4 +1,4 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createRecipe } from '../../../src/lib/editorial/create';
 import { saveRecipe } from '../../../src/lib/editorial/save';
 import { EditorialError } from '../../../src/lib/editorial/errors';
@@ -6,6 +6,10 @@ import { stopCompileWorker } from '../../../src/lib/recipes/authored-mdx/compile
 import { DRAFT, PEOPLE, testContext } from './context';
 
 type T = Awaited<ReturnType<typeof testContext>>;
+
+// The first save starts the compile worker, which takes seconds on a busy machine.
+vi.setConfig({ testTimeout: 30_000 });
+afterAll(() => stopCompileWorker());
 
 async function refusal(p: Promise<unknown>): Promise<EditorialError> {
   try {
@@ -20,10 +24,7 @@ async function refusal(p: Promise<unknown>): Promise<EditorialError> {
 describe('createRecipe', () => {
   let t: T;
   beforeEach(async () => (t = await testContext()));
-  afterEach(async () => {
-    await t.cleanup();
-    await stopCompileWorker();
-  });
+  afterEach(() => t.cleanup());
 
   it('creates a draft at revision 1 with a slug from the title, its compiled body and an audit entry', async () => {
     const recipe = await createRecipe(t.ctx, PEOPLE.author, DRAFT);
@@ -59,10 +60,7 @@ describe('saveRecipe', () => {
     t = await testContext();
     slug = (await createRecipe(t.ctx, PEOPLE.author, DRAFT)).slug;
   });
-  afterEach(async () => {
-    await t.cleanup();
-    await stopCompileWorker();
-  });
+  afterEach(() => t.cleanup());
 
   it('stores every save as a new revision with who and the message', async () => {
     const saved = await saveRecipe(t.ctx, PEOPLE.author, slug, { baseRevision: 1, summary: 'Holds the HTST hot-water set; PI tuned from the March bump test.', message: 'Summary from field test' });

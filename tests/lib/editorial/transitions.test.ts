@@ -1,4 +1,4 @@
-import { afterAll, beforeEach, afterEach, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, afterEach, describe, expect, it, vi } from 'vitest';
 import { createRecipe } from '../../../src/lib/editorial/create';
 import { transitionRecipe } from '../../../src/lib/editorial/transitions';
 import { EditorialError } from '../../../src/lib/editorial/errors';
@@ -34,6 +34,9 @@ const TABLE: { from: string; action: Transition; to: string | null }[] = [
   { from: 'retired', action: 'return', to: null },
   { from: 'retired', action: 'retire', to: null },
 ];
+
+// The first compile starts the worker, which takes seconds on a busy machine.
+vi.setConfig({ testTimeout: 30_000 });
 
 describe('transitionRecipe', () => {
   let t: T;

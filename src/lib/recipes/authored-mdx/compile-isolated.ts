@@ -7,12 +7,14 @@ import type { WorkerRequest, WorkerResponse } from './compile-worker';
 
 interface Pending { resolve(result: CompileResult): void; timer: NodeJS.Timeout }
 
-let worker: Worker | null = null;
+let worker: Promise<Worker> | null = null;
+let current: Worker | null = null;
 let nextId = 1;
 const pending = new Map<number, Pending>();
 /** Bodies wait here so that only one compiles at a time and a timeout blames the right one. */
 let queue: Promise<unknown> = Promise.resolve();
 
+/** Starts a worker and resolves once it has loaded the compiler (or fails if it cannot). */
 async function startWorker(): Promise<Worker> {
   // Imported lazily so the bundler gives the worker module a chunk of its own to start on.
   const { WORKER_URL, WORKER_ROLE } = await import('./compile-worker');
@@ -21,16 +23,23 @@ async function startWorker(): Promise<Worker> {
     ? new Worker(typeScriptEntry(WORKER_URL), { ...options, eval: true })
     : new Worker(new URL(WORKER_URL), options);
   w.unref();
-  w.on('message', (msg: WorkerResponse) => settle(msg.id, msg.result));
+  current = w;
+  const ready = new Promise<void>((resolve, reject) => {
+    w.once('error', reject);
+    w.once('exit', () => reject(new Error('The compile worker stopped while starting.')));
+    w.on('message', (msg: WorkerResponse | { ready: true }) => ('ready' in msg ? resolve() : settle(msg.id, msg.result)));
+  });
   // A worker that was replaced after a timeout has nothing pending any more; only the current one's
   // crash fails the waiting body.
   const crashed = () => {
-    if (worker !== w) return;
+    if (current !== w) return;
+    current = null;
     worker = null;
     failAll('The body could not be compiled; simplify it and try again.');
   };
   w.on('error', crashed);
   w.on('exit', crashed);
+  await ready;
   return w;
 }
 
@@ -67,13 +76,20 @@ export function compileBodyIsolated(body: string, timeoutMs: number = BODY_LIMIT
 }
 
 async function compileOnce(body: string, timeoutMs: number): Promise<CompileResult> {
-  worker ??= await startWorker();
-  const w = worker;
+  worker ??= startWorker();
+  let w: Worker;
+  try {
+    w = await worker;
+  } catch {
+    worker = null;
+    return { ok: false, problems: [{ line: 1, column: 1, reason: 'The body could not be compiled right now; try again in a moment.' }] };
+  }
   const id = nextId++;
   return new Promise<CompileResult>((resolve) => {
     const timer = setTimeout(() => {
       pending.delete(id);
       worker = null;
+      current = null;
       void w.terminate();
       resolve({ ok: false, problems: [{ line: 1, column: 1, reason: `The body took longer than ${timeoutMs / 1000} s to read; it may hold a long run of * or _ or deep nesting — simplify it.` }] });
     }, timeoutMs);
@@ -84,7 +100,8 @@ async function compileOnce(body: string, timeoutMs: number): Promise<CompileResu
 
 /** Stops the worker (tests and shutdown). */
 export async function stopCompileWorker(): Promise<void> {
-  const w = worker;
+  const w = current;
   worker = null;
+  current = null;
   if (w) await w.terminate();
 }

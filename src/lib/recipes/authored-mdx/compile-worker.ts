@@ -24,4 +24,6 @@ if (!isMainThread && parentPort && (workerData as { role?: string } | null)?.rol
     }
     port.postMessage({ id: req.id, result } satisfies WorkerResponse);
   });
+  // Loading the parser takes a while on a busy machine; the time budget starts only after this.
+  port.postMessage({ ready: true });
 }

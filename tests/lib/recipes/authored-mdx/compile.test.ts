@@ -1,4 +1,4 @@
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it, vi } from 'vitest';
 import { compileBody } from '../../../../src/lib/recipes/authored-mdx/compile';
 import { compileBodyIsolated, stopCompileWorker } from '../../../../src/lib/recipes/authored-mdx/compile-isolated';
 import { HOSTILE_BODIES } from './hostile-bodies';
@@ -20,6 +20,9 @@ const GOOD_BODY = [
   '',
   '[^fit]: Fitted on the plant, see [the step-test notes](/recipes/hot-water-step-test).',
 ].join('\n');
+
+// The first compile starts the worker, which takes seconds on a busy machine.
+vi.setConfig({ testTimeout: 30_000 });
 
 describe('compileBody', () => {
   it('renders Markdown, math, tables, footnotes and a calculator placeholder with validated props', () => {
