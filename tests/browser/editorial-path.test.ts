@@ -50,8 +50,9 @@ describe('the editorial path in the browser', () => {
     await page.goto(`${server.url}/recipes/new`);
     await page.getByRole('link', { name: 'temperature' }).click();
     await page.waitForURL(/loopType=temperature/);
+    // Buttons render before React takes over; wait until the island has hydrated.
+    await page.locator('[data-testid=recipe-editor][data-ready=true]').waitFor();
     const editor = page.getByTestId('recipe-editor');
-    await expect.poll(() => page.getByTestId('save').isEnabled()).toBe(true);
     await editor.locator('input[name=title]').fill('Glycol chiller supply temperature');
     await editor.locator('textarea[name=summary]').fill('Holds the quenchwater glycol supply at 1 °C for the yoghurt cooling tunnel.');
     await editor.locator('input[name=loopTags]').fill('TIC-610');
@@ -69,7 +70,7 @@ describe('the editorial path in the browser', () => {
     await page.getByTestId('save').click();
     await page.waitForURL(/\/recipes\/glycol-chiller-supply-temperature\/edit\?created=1/);
     slug = 'glycol-chiller-supply-temperature';
-    await expect.poll(() => page.getByTestId('submit').isEnabled()).toBe(true);
+    await page.locator('[data-testid=recipe-editor][data-ready=true]').waitFor();
     await page.getByTestId('submit').click();
     await expect.poll(() => page.getByTestId('editor-notice').textContent()).toContain('Submitted');
     await page.screenshot({ path: artifactPath('editorial-editor.png'), fullPage: true });
@@ -92,6 +93,8 @@ describe('the editorial path in the browser', () => {
     await page.getByRole('link', { name: /Glycol chiller supply temperature/ }).first().click();
     await page.waitForURL(new RegExp(`/recipes/${slug}$`));
     await expect.poll(() => page.locator('[data-island="LoopResponse"][data-hydrated="true"]').count(), { timeout: 20_000 }).toBe(1);
+    await page.getByTestId('rating-panel').scrollIntoViewIfNeeded();
+    await page.locator('[data-testid=rating-panel][data-ready=true]').waitFor();
     await page.getByTestId('star-4').click();
     await page.getByTestId('note-input').fill('Used on TIC-611 as well; ti 20 % longer because the valve sticks.');
     await page.getByTestId('rate').click();
@@ -106,16 +109,16 @@ describe('the editorial path in the browser', () => {
     const list = await curator.request.get(`${server.url}/api/v1/recipes`);
     const successor = ((await list.json()).recipes as { slug: string; source: string }[]).find((r) => r.source === 'file')!.slug;
     await curator.goto(`${server.url}/recipes/${slug}`);
+    await curator.locator('[data-testid=workflow-actions][data-ready=true]').waitFor();
     await curator.getByTestId('action-retire').click();
     await curator.getByTestId('retire-reason').fill('The chiller was replaced by a plate unit with its own controller.');
     await curator.getByTestId('retire-successor').fill(successor);
-    await curator.getByTestId('retire-confirm').click();
-    await curator.waitForLoadState('load');
+    await Promise.all([curator.waitForEvent('load'), curator.getByTestId('retire-confirm').click()]);
     await curator.close();
 
     const reader = await pageAs('reader');
     await reader.goto(`${server.url}/recipes/${slug}`);
-    const banner = reader.getByTestId('status-banner');
+    const banner = reader.getByTestId('retired-banner');
     await expect.poll(() => banner.textContent()).toMatch(/retired/i);
     expect(await banner.textContent()).toContain('The chiller was replaced by a plate unit');
     expect(await banner.locator(`a[href="/recipes/${successor}"]`).count()).toBe(1);

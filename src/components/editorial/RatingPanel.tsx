@@ -15,6 +15,7 @@ export default function RatingPanel({ slug, initialRating }: { slug: string; ini
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<ApiError | null>(null);
   const [saved, setSaved] = useState(false);
+  const [ready, setReady] = useState(false);
 
   async function load() {
     const res = await callApi<NotesAnswer>('GET', `/api/v1/recipes/${slug}/notes`);
@@ -26,7 +27,10 @@ export default function RatingPanel({ slug, initialRating }: { slug: string; ini
       setNote((n) => n || res.data.mine!.note || '');
     }
   }
-  useEffect(() => void load(), [slug]);
+  useEffect(() => {
+    setReady(true);
+    void load();
+  }, [slug]);
 
   async function send() {
     if (stars < 1) {
@@ -45,7 +49,7 @@ export default function RatingPanel({ slug, initialRating }: { slug: string; ini
   }
 
   return (
-    <section className="rating-panel no-print" aria-labelledby="rating-heading" data-testid="rating-panel">
+    <section className="rating-panel no-print" aria-labelledby="rating-heading" data-testid="rating-panel" data-ready={ready ? 'true' : undefined}>
       <h2 id="rating-heading">Ratings and field notes</h2>
       <p data-testid="rating-summary">
         {rating.count ? `${rating.average?.toFixed(1)} of 5 from ${rating.count} ${rating.count === 1 ? 'person' : 'people'}` : 'Nobody has rated it yet.'}

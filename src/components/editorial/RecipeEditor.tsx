@@ -71,8 +71,10 @@ export default function RecipeEditor(props: RecipeEditorProps) {
   const [restorable, setRestorable] = useState<EditorFields | null>(null);
   const [dirty, setDirty] = useState(false);
   const bodyRef = useRef<HTMLTextAreaElement>(null);
+  const [ready, setReady] = useState(false);
 
   useEffect(() => {
+    setReady(true);
     try {
       const saved = localStorage.getItem(backupKey);
       if (saved && saved !== JSON.stringify(props.initial)) setRestorable(JSON.parse(saved));
@@ -151,7 +153,7 @@ export default function RecipeEditor(props: RecipeEditorProps) {
   );
 
   return (
-    <div className="recipe-editor" data-testid="recipe-editor">
+    <div className="recipe-editor" data-testid="recipe-editor" data-ready={ready ? 'true' : undefined}>
       {restorable && (
         <p className="editor-notice" role="status">
           This browser kept text you had not saved.{' '}

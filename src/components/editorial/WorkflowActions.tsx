@@ -1,5 +1,5 @@
 import './editorial.css';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { callApi, type ApiError } from './api';
 
 export interface WorkflowActionsProps {
@@ -21,6 +21,8 @@ export default function WorkflowActions({ slug, status, isOwner, isCurator }: Wo
   const [successor, setSuccessor] = useState('');
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<ApiError | null>(null);
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
 
   async function act(action: 'submit' | 'publish' | 'return' | 'retire', body?: unknown) {
     setBusy(true);
@@ -32,7 +34,7 @@ export default function WorkflowActions({ slug, status, isOwner, isCurator }: Wo
   }
 
   return (
-    <div className="workflow-actions no-print" data-testid="workflow-actions">
+    <div className="workflow-actions no-print" data-testid="workflow-actions" data-ready={ready ? 'true' : undefined}>
       {isOwner && status === 'draft' && <button type="button" disabled={busy} onClick={() => void act('submit')} data-testid="action-submit">Submit for review</button>}
       {isCurator && status === 'in_review' && (
         <>
