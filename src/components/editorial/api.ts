@@ -14,11 +14,13 @@ export type ApiResult<T> = { ok: true; status: number; data: T } | { ok: false; 
 export async function callApi<T>(method: 'GET' | 'POST' | 'PUT' | 'DELETE', path: string, body?: unknown): Promise<ApiResult<T>> {
   let res: Response;
   try {
+    // Writes always carry a JSON body: the server refuses bodiless cross-site-looking POSTs.
+    const payload = body === undefined && method !== 'GET' ? {} : body;
     res = await fetch(path, {
       method,
       credentials: 'same-origin',
-      headers: body === undefined ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
+      headers: payload === undefined ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
+      body: payload === undefined ? undefined : JSON.stringify(payload),
     });
   } catch {
     return { ok: false, status: 0, error: { code: 'network', message: 'The server could not be reached; nothing was lost — try again when the connection is back.' }, body: {} };
