@@ -1,6 +1,8 @@
 import { getCollection } from 'astro:content';
 import { fileRecord, type RecipeRecord } from './record';
 import { sharedSearchIndex } from './search/shared';
+import { db } from '../db';
+import { authoredRecords } from '../editorial/records';
 
 let files: Promise<RecipeRecord[]> | undefined;
 
@@ -15,7 +17,7 @@ function fileRecipes(): Promise<RecipeRecord[]> {
  * recipes from the database join here as a second source.
  */
 export async function allRecipes(): Promise<RecipeRecord[]> {
-  const sources = await Promise.all([fileRecipes()]);
+  const sources = await Promise.all([fileRecipes(), authoredRecords(db())]);
   return sources.flat();
 }
 

@@ -16,6 +16,8 @@ export interface RecipeRecord {
   body: string;
   /** ISO timestamp of the last change. */
   updatedAt: string;
+  /** For an authored recipe: its body compiled and sanitized at save time (src/lib/recipes/authored-mdx). */
+  html?: string;
 }
 
 /** The path of a recipe's page. */

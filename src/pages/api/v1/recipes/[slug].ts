@@ -17,3 +17,8 @@ export const GET: APIRoute = async ({ params, locals }) => {
   const ratings = await ratingsFor([record.slug]);
   return json(toApiRecipe(record, ratings.get(record.slug)!));
 };
+
+import { saveRecipeRoute } from '../../../../lib/editorial/routes/save-recipe';
+
+/** PUT /api/v1/recipes/{slug} (its owner, or curator+): save a revision (src/lib/editorial/save.ts). */
+export const PUT = saveRecipeRoute;

@@ -16,3 +16,8 @@ export const GET: APIRoute = async ({ url, locals }) => {
   const chosen = selectRecipes(records, query.data, viewer, { index: await recipeSearchIndex(), ratings });
   return json({ recipes: chosen.map((r) => toApiRecipe(r, ratings.get(r.slug)!)) });
 };
+
+import { createRecipeRoute } from '../../../../lib/editorial/routes/create-recipe';
+
+/** POST /api/v1/recipes (author+): create a draft (src/lib/editorial/create.ts). */
+export const POST = createRecipeRoute;
