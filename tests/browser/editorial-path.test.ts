@@ -92,7 +92,9 @@ describe('the editorial path in the browser', () => {
     await page.goto(`${server.url}/search?q=quenchwater`);
     await page.getByRole('link', { name: /Glycol chiller supply temperature/ }).first().click();
     await page.waitForURL(new RegExp(`/recipes/${slug}$`));
-    await expect.poll(() => page.locator('[data-island="LoopResponse"][data-hydrated="true"]').count(), { timeout: 20_000 }).toBe(1);
+    // The calculator is a real island: hydrated once Astro drops its `ssr` marker.
+    await page.locator('[data-island="LoopResponse"]').scrollIntoViewIfNeeded();
+    await expect.poll(() => page.locator('[data-island="LoopResponse"] astro-island:not([ssr])').count(), { timeout: 20_000 }).toBe(1);
     await page.getByTestId('rating-panel').scrollIntoViewIfNeeded();
     await page.locator('[data-testid=rating-panel][data-ready=true]').waitFor();
     await page.getByTestId('star-4').click();

@@ -1,5 +1,16 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useState, type ComponentType } from 'react';
 import { callApi } from './api';
+import { splitIslands } from '../../lib/recipes/authored-mdx/islands-in-html';
+import type { AllowedComponentName } from '../../lib/recipes/authored-mdx/component-names';
+import LoopResponse from '../calculators/LoopResponse';
+import FrequencyView from '../calculators/FrequencyView';
+import TuningComparison from '../calculators/TuningComparison';
+import BlockChain from '../calculators/BlockChain';
+import PidConverter from '../calculators/PidConverter';
+import Discretizer from '../calculators/Discretizer';
+
+/** The calculators a body may place, as the preview renders them (props validated by the server). */
+const CALCULATORS: Record<AllowedComponentName, ComponentType<any>> = { LoopResponse, FrequencyView, TuningComparison, BlockChain, PidConverter, Discretizer };
 
 interface Problem {
   line: number;
@@ -10,13 +21,12 @@ type PreviewAnswer = { ok: true; html: string } | { ok: false; problems: Problem
 
 /**
  * The live preview beside the editor: the body compiled by the server exactly as a save
- * would (POST /api/v1/preview), shown as sanitized HTML with its calculators hydrated, or
+ * would (POST /api/v1/preview), shown as sanitized HTML with its calculators live, or
  * the problems with line and column. Waits for a pause in typing before asking.
  */
 export default function Preview({ body, onProblemClick }: { body: string; onProblemClick(line: number, column: number): void }) {
   const [answer, setAnswer] = useState<PreviewAnswer | null>(null);
   const [state, setState] = useState<'idle' | 'working' | 'offline'>('idle');
-  const pane = useRef<HTMLDivElement>(null);
 
   useEffect(() => {
     const timer = setTimeout(async () => {
@@ -29,15 +39,6 @@ export default function Preview({ body, onProblemClick }: { body: string; onProb
     }, 400);
     return () => clearTimeout(timer);
   }, [body]);
-
-  useEffect(() => {
-    const el = pane.current;
-    if (!el || !answer?.ok) return;
-    // The HTML is the server's sanitized output; calculators inside are mounted by the hydrator.
-    document.dispatchEvent(new CustomEvent('loopwright:unmount-islands', { detail: el }));
-    el.innerHTML = answer.html;
-    document.dispatchEvent(new Event('loopwright:islands'));
-  }, [answer]);
 
   return (
     <section className="editor-preview" aria-label="Preview" data-testid="preview">
@@ -56,7 +57,16 @@ export default function Preview({ body, onProblemClick }: { body: string; onProb
           ))}
         </ul>
       )}
-      <div ref={pane} className="authored-body prose" hidden={!answer?.ok} data-testid="preview-html" />
+      {answer?.ok && (
+        <div className="authored-body" data-testid="preview-html">
+          {/* HTML parts are the server's sanitized output; calculators render as components. */}
+          {splitIslands(answer.html).map((s, i) => {
+            if (s.kind === 'html') return <div key={i} dangerouslySetInnerHTML={{ __html: s.html }} />;
+            const Calculator = CALCULATORS[s.name];
+            return <div key={`${i}-${s.name}`} className="authored-island" data-island={s.name} data-hydrated="true"><Calculator {...s.props} id={`preview-${i}`} /></div>;
+          })}
+        </div>
+      )}
     </section>
   );
 }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { BlockSchema, ClaimSchema, PidControllerSchema, ProcessModelSchema, TransferFunctionSchema } from '../../schemas';
+import { BlockSchema, ClaimSchema, FopdtSchema, IpdtSchema, PidControllerSchema, ProcessModelSchema, SopdtSchema, TransferFunctionSchema } from '../../schemas';
 import type { AllowedComponentName } from './component-names';
 
 export { ALLOWED_COMPONENT_NAMES, type AllowedComponentName } from './component-names';
@@ -37,11 +37,10 @@ export const ALLOWED_COMPONENTS: Record<AllowedComponentName, z.ZodType> = {
     title: Caption.optional(),
   }),
   TuningComparison: z.strictObject({
-    model: ProcessModelSchema,
-    /** PI or PID rules. */
-    controller: z.enum(['pi', 'pid']).optional(),
-    /** Rules to compare (the contract's rule names). */
-    rules: z.array(z.enum(['simc', 'lambda', 'imc', 'zn-open-loop', 'cohen-coon', 'amigo'])).max(10).optional(),
+    /** The model the rules tune: first or second order with dead time, or integrating. */
+    model: z.union([FopdtSchema, SopdtSchema, IpdtSchema]),
+    /** Which controller the rules design. */
+    controller: z.enum(['pi', 'pid']),
     id: InstanceId.optional(),
     title: Caption.optional(),
   }),

@@ -16,7 +16,8 @@ export const KATEX_LIMITS = { maxSize: 20, maxExpand: 200 } as const;
 /**
  * Turns a validated tree into HTML: Markdown → HTML, formulas through KaTeX (untrusted: no
  * \href, \url, \html…), then the sanitizer, then each calculator becomes an inert placeholder
- * `<div data-island="Name" data-props="{json}">` that the page's bundled script hydrates.
+ * `<div data-island="Name" data-props="{json}">`, which pages split out and render as islands
+ * (islands-in-html.ts).
  * The placeholders are written after sanitizing, from the validated props, never from the body.
  */
 export function renderTree(tree: MdastRoot, islands: PlacedIsland[]): string {

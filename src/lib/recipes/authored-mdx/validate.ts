@@ -35,7 +35,7 @@ const ALLOWED_LIST = ALLOWED_COMPONENT_NAMES.map((n) => `<${n} />`).join(', ');
 export function validateTree(tree: Root): ValidationResult {
   const problems: BodyProblem[] = [];
   const islands: PlacedIsland[] = [];
-  const visit = (node: Root | RootContent) => {
+  const visit = (node: Root | RootContent, depth: number) => {
     const at = node.position?.start;
     switch (node.type) {
       case 'mdxjsEsm':
@@ -55,6 +55,10 @@ export function validateTree(tree: Root): ValidationResult {
           : elementRefusal(node.name)));
         return;
       case 'mdxJsxFlowElement': {
+        if (depth > 1 && isAllowedComponent(node.name)) {
+          problems.push(problemAt(at, `Put <${node.name} /> at the top level of the body, not inside a list, quote or table.`));
+          return;
+        }
         const island = checkElement(node, problems);
         if (island) islands.push(island);
         return;
@@ -79,9 +83,9 @@ export function validateTree(tree: Root): ValidationResult {
           return;
         }
     }
-    if ('children' in node) for (const child of node.children as RootContent[]) visit(child);
+    if ('children' in node) for (const child of node.children as RootContent[]) visit(child, depth + 1);
   };
-  visit(tree);
+  visit(tree, 0);
   return { problems, islands };
 }
 

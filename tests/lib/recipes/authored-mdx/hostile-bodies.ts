@@ -60,6 +60,7 @@ export const HOSTILE_BODIES: HostileBody[] = [
   { name: 'regular expression literal', body: '<LoopResponse model={/x/} controller={{ form: "ideal", kc: 1 }} />', expect: 'refused' },
   { name: 'children inside a calculator', body: `<LoopResponse ${LOOP}><script>${PWN}</script></LoopResponse>`, expect: 'refused' },
   { name: 'calculator inline in text', body: `See <PidConverter controller={{ form: "ideal", kc: 1 }} /> here.`, expect: 'refused' },
+  { name: 'calculator nested in a list', body: `- step one\n\n  <PidConverter controller={{ form: "ideal", kc: 1 }} />`, expect: 'refused' },
   { name: 'props that fail the calculator schema', body: '<Discretizer tf={{ num: [1], den: [1, 1] }} ts={-1} />', expect: 'refused' },
   // URLs
   { name: 'markdown javascript link', body: `[click](javascript:${PWN})`, expect: 'refused' },
