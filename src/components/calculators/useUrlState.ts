@@ -5,6 +5,9 @@ import { readState, writeState } from '../../lib/calculators/url-state';
 /** How long the address waits after the last change before it is rewritten, ms. */
 const WRITE_DELAY_MS = 250;
 
+/** Ids in use on this page: two calculators with one id would overwrite each other's link state. */
+const mounted = new Map<string, number>();
+
 /**
  * State kept in the page address under the island's own parameter. The first render uses
  * `initial` (so the server's HTML and hydration agree); right after hydration a shared link's
@@ -17,6 +20,15 @@ export function useUrlState<S extends z.ZodType>(id: string, schema: S, initial:
   const initialJson = useRef(JSON.stringify(initial));
   const restored = useRef(false);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+
+  useEffect(() => {
+    const count = (mounted.get(id) ?? 0) + 1;
+    mounted.set(id, count);
+    if (count > 1) console.warn(`Two calculators on this page use the id "${id}"; give each its own id prop so links keep both.`);
+    return () => {
+      mounted.set(id, (mounted.get(id) ?? 1) - 1);
+    };
+  }, [id]);
 
   useEffect(() => {
     const fromLink = readState(window.location.search, id, schema);
