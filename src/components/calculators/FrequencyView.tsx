@@ -1,10 +1,11 @@
 import { useMemo, useRef } from 'react';
 import type uPlot from 'uplot';
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import { LinkControllerSchema, LinkModelSchema } from '../../lib/calculators/link-state';
 import { frequencyView, type FrequencyViewResult } from '../../lib/calculators/frequency-view';
 import { formatNumber, formatWithUnit } from '../../lib/calculators/units';
-import { PidControllerSchema, type PidControllerInput } from '../../lib/schemas/controller';
-import { ProcessModelSchema, type ProcessModelInput } from '../../lib/schemas/process-model';
+import type { PidControllerInput } from '../../lib/schemas/controller';
+import type { ProcessModelInput } from '../../lib/schemas/process-model';
 import type { TransferFunctionInput } from '../../lib/schemas/transfer-function';
 import Chart, { type ChartMarker } from './Chart';
 import ExportBar from './ExportBar';
@@ -24,7 +25,7 @@ export interface FrequencyViewProps {
   title?: string;
 }
 
-const StateSchema = z.object({ model: ProcessModelSchema, controller: PidControllerSchema });
+const StateSchema = z.object({ model: LinkModelSchema, controller: LinkControllerSchema });
 type State = z.infer<typeof StateSchema>;
 
 /** The phase axis stops here: past two turns a long dead time only adds unreadable decades. */

@@ -1,11 +1,12 @@
 import { useMemo, useRef } from 'react';
 import type uPlot from 'uplot';
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import { LinkControllerSchema, LinkModelSchema } from '../../lib/calculators/link-state';
 import { analyzeLoop, type LoopResult } from '../../lib/calculators/loop';
 import { checkClaims } from '../../lib/calculators/claims';
 import { settingsText, DEFAULT_UNITS } from '../../lib/calculators/pid-display';
-import { PidControllerSchema, type PidControllerInput } from '../../lib/schemas/controller';
-import { ProcessModelSchema, type ProcessModelInput } from '../../lib/schemas/process-model';
+import type { PidControllerInput } from '../../lib/schemas/controller';
+import type { ProcessModelInput } from '../../lib/schemas/process-model';
 import type { TransferFunctionInput } from '../../lib/schemas/transfer-function';
 import type { Claim } from '../../lib/schemas/claim';
 import type { PidController } from '../../lib/control/types';
@@ -37,10 +38,10 @@ export interface LoopResponseProps {
 }
 
 const StateSchema = z.object({
-  model: ProcessModelSchema,
-  controller: PidControllerSchema,
+  model: LinkModelSchema,
+  controller: LinkControllerSchema,
   /** Horizon in s; null = the one chosen from the recipe's own numbers. */
-  tFinal: z.number().positive().nullable(),
+  tFinal: z.nullable(z.number().check(z.positive())),
 });
 type State = z.infer<typeof StateSchema>;
 

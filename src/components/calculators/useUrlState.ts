@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { z } from 'zod';
-import { readState, writeState } from '../../lib/calculators/url-state';
+import type { output } from 'zod/v4/core';
+import { readState, writeState, type StateSchema } from '../../lib/calculators/url-state';
 
 /** How long the address waits after the last change before it is rewritten, ms. */
 const WRITE_DELAY_MS = 250;
@@ -14,8 +14,8 @@ const mounted = new Map<string, number>();
  * state, if valid, replaces it. Changes are written with history.replaceState, debounced; the
  * parameter is removed when the state is back to `initial`.
  */
-export function useUrlState<S extends z.ZodType>(id: string, schema: S, initial: z.infer<S>) {
-  type State = z.infer<S>;
+export function useUrlState<S extends StateSchema>(id: string, schema: S, initial: output<S>) {
+  type State = output<S>;
   const [state, setState] = useState<State>(initial);
   const initialJson = useRef(JSON.stringify(initial));
   const restored = useRef(false);

@@ -4,7 +4,10 @@
  * the value is the state as JSON in URL-safe base64 (numbers keep every digit, any shape of
  * state fits, and the address stays one opaque token per island). Pure: no DOM.
  */
-import type { z } from 'zod';
+import type { $ZodType, output } from 'zod/v4/core';
+
+/** Any zod schema, from the full build or from zod/mini. */
+export type StateSchema = $ZodType & { safeParse(data: unknown): { success: boolean; data?: unknown } };
 
 /** Query parameter names are the island id, restricted so they never need escaping. */
 const ID = /^[a-z0-9][a-z0-9-]{0,39}$/i;
@@ -41,7 +44,7 @@ export function encodeState(state: unknown): string {
 }
 
 /** The state a token carries, checked by the island's schema; null when absent, garbled or invalid. */
-export function decodeState<S extends z.ZodType>(token: string | null | undefined, schema: S): z.infer<S> | null {
+export function decodeState<S extends StateSchema>(token: string | null | undefined, schema: S): output<S> | null {
   if (!token) return null;
   const json = fromBase64Url(token);
   if (json === null) return null;
@@ -52,11 +55,11 @@ export function decodeState<S extends z.ZodType>(token: string | null | undefine
     return null;
   }
   const parsed = schema.safeParse(raw);
-  return parsed.success ? parsed.data : null;
+  return parsed.success ? (parsed.data as output<S>) : null;
 }
 
 /** The island's state from a query string (`location.search`); null when the link carries none. */
-export function readState<S extends z.ZodType>(search: string, id: string, schema: S): z.infer<S> | null {
+export function readState<S extends StateSchema>(search: string, id: string, schema: S): output<S> | null {
   return decodeState(new URLSearchParams(search).get(stateParam(id)), schema);
 }
 
