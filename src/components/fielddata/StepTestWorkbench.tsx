@@ -10,11 +10,13 @@ export interface StepTestWorkbenchProps {
   areas: { code: string; name: string }[];
   recipes: RecipeOption[];
   loopTypes: readonly string[];
+  /** A stored test to reopen at its fits (from the list of earlier uploads). */
+  initialStepTestId?: number | null;
 }
 
 /** Upload a step test, fit the models, pick one, choose tuning and save it all as evidence. */
-export default function StepTestWorkbench({ areas, recipes, loopTypes }: StepTestWorkbenchProps) {
-  const [stepTestId, setStepTestId] = useState<number | null>(null);
+export default function StepTestWorkbench({ areas, recipes, loopTypes, initialStepTestId = null }: StepTestWorkbenchProps) {
+  const [stepTestId, setStepTestId] = useState<number | null>(initialStepTestId);
   const [fit, setFit] = useState<FitView | null>(null);
   const [answer, setAnswer] = useState<FitAnswer | null>(null);
   const [tuning, setTuning] = useState<TunedChoice | null>(null);
