@@ -13,7 +13,7 @@
 import { ModelError, type TransferFunction } from './types';
 import { add, degree, multiply } from './polynomial';
 import { cascade, discretizeCubic, discretizeStates as discretize, toStateSpace } from './state-space';
-import { impulseResponse, stepResponse, type TimeResponse } from './simulate';
+import { impulseResponse, rampResponse, simulateInput, stepResponse, type TimeResponse } from './simulate';
 import { roots } from './roots';
 import { gridStep, timeGrid } from './time-grid';
 import { cabs } from './roots';
@@ -72,11 +72,90 @@ export function closedLoopTransferFunction(loop: Loop, input: LoopInput): Transf
   return { num, den, delay: g.delay + h.delay };
 }
 
+/** A test signal: a unit step, a unit ramp (1 per s) or samples on the response's time grid (linear between them). */
+export type LoopSignal = 'step' | 'ramp' | { samples: readonly number[] };
+
+/** What drives the loop: the setpoint and/or a load added to the plant input (superposed). */
+export interface LoopDrive {
+  setpoint?: LoopSignal;
+  load?: LoopSignal;
+}
+
+/** A closed-loop response with its rate dy/dt (1/s), which is also the impulse response of a step drive. */
+export interface LoopResponse extends TimeResponse {
+  rate: number[];
+}
+
 /** Unit step response of the closed loop to the setpoint or to a load at the plant input. */
 export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInput = 'setpoint', options: ClosedLoopOptions = {}): TimeResponse {
+  const r = closedLoopResponse(loop, t, input === 'setpoint' ? { setpoint: 'step' } : { load: 'step' }, options);
+  return { t: r.t, y: r.y };
+}
+
+/** Impulse response (regular part) of the closed loop: the rate of its step response. */
+export function closedLoopImpulse(loop: Loop, t: readonly number[], input: LoopInput = 'setpoint', options: ClosedLoopOptions = {}): TimeResponse {
+  const r = closedLoopResponse(loop, t, input === 'setpoint' ? { setpoint: 'step' } : { load: 'step' }, options);
+  return { t: r.t, y: r.rate };
+}
+
+function sampledAt(samples: readonly number[], t0: number, dt: number): { at: (x: number) => number; slope: (x: number) => number } {
+  const last = samples.length - 1;
+  const seg = (x: number) => Math.min(Math.max(0, Math.floor((x - t0) / dt)), last - 1);
+  return {
+    at: (x) => {
+      if (last === 0) return samples[0];
+      const j = seg(x);
+      return samples[j] + ((x - t0 - j * dt) / dt) * (samples[j + 1] - samples[j]);
+    },
+    slope: (x) => (last === 0 ? 0 : (samples[seg(x) + 1] - samples[seg(x)]) / dt),
+  };
+}
+
+function signalFunctions(sig: LoopSignal | undefined, t: readonly number[], dt: number, field: string): { at: (x: number) => number; slope: (x: number) => number } {
+  if (sig === undefined) return { at: () => 0, slope: () => 0 };
+  if (sig === 'step') return { at: () => 1, slope: () => 0 };
+  if (sig === 'ramp') return { at: (x) => x - t[0], slope: () => 1 };
+  if (sig.samples.length !== t.length) throw new ModelError('A sampled signal needs one value per time sample.', 'invalid_request', field);
+  sig.samples.forEach((v, i) => {
+    if (!Number.isFinite(v)) throw new ModelError('Signal values must be finite numbers.', 'invalid_request', `${field}.${i}`);
+  });
+  return sampledAt(sig.samples, t[0], dt);
+}
+
+/** Open-path response of g to a signal, and its rate, on the evenly spaced grid t. */
+function openResponse(g: TransferFunction, t: readonly number[], sig: LoopSignal | undefined, dt: number): { y: number[]; rate: number[] } {
+  if (sig === undefined) return { y: new Array<number>(t.length).fill(0), rate: new Array<number>(t.length).fill(0) };
+  if (sig === 'step') return { y: stepResponse(g, t).y, rate: impulseResponse(g, t).y };
+  if (sig === 'ramp') return { y: rampResponse(g, t).y, rate: stepResponse(g, t).y };
+  const f = sampledAt(sig.samples.length === t.length ? sig.samples : resample(sig.samples, t.length), t[0], dt);
+  const u = t.map((x) => f.at(x));
+  const y = simulateInput(g, t, u).y;
+  // dy/dt = (g driven by du/dt) + u(0)·(impulse response of g): the input starts from rest at t[0].
+  const slopes = t.map((x) => f.slope(x + 0.5 * dt));
+  const fromSlope = simulateInput(g, t, slopes).y;
+  const fromStart = impulseResponse(g, t).y;
+  return { y, rate: fromSlope.map((v, i) => v + u[0] * fromStart[i]) };
+}
+
+function resample(samples: readonly number[], n: number): number[] {
+  return Array.from({ length: n }, (_, i) => samples[Math.round((i * (samples.length - 1)) / Math.max(1, n - 1))]);
+}
+
+function sumOf(a: number[], b: number[]): number[] {
+  return a.map((v, i) => v + b[i]);
+}
+
+/** Closed-loop response to a setpoint and/or load signal (superposed), dead times exact. */
+export function closedLoopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, options: ClosedLoopOptions = {}): LoopResponse {
   const theta = loop.plant.delay + loop.sensor.delay;
-  if (theta === 0) return stepResponse(closedLoopTransferFunction(loop, input), t);
-  gridStep(t);
+  const dtOut = gridStep(t);
+  if (theta === 0) {
+    const sp = openResponse(closedLoopTransferFunction(loop, 'setpoint'), t, drive.setpoint, dtOut);
+    const ld = openResponse(closedLoopTransferFunction(loop, 'load'), t, drive.load, dtOut);
+    return { t: [...t], y: sumOf(sp.y, ld.y), rate: sumOf(sp.rate, ld.rate) };
+  }
+  const rSig = signalFunctions(drive.setpoint, t, dtOut, 'setpoint');
+  signalFunctions(drive.load, t, dtOut, 'load');
   const span = t[t.length - 1] - t[0];
   const rational = (g: TransferFunction): TransferFunction => ({ num: g.num, den: g.den, delay: 0 });
   const gR = rational(loop.plant);
@@ -91,16 +170,21 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
   const n = ss.n;
   const [cz, cm] = ss.c;
   const [dz, dm] = ss.d;
-  // Known forcing by the load step: z2 = G_R·d and m2 = H_R·G_R·d (and their rates), exact on the grid.
-  const load = input === 'load';
-  const inner = load ? timeGrid(steps * h, steps + 1) : [];
-  const hg = { num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 };
+  // Known forcing by the load: z2 = G_R·d and m2 = H_R·G_R·d (and their rates) on the internal grid.
+  const load = drive.load !== undefined;
   const zero = new Float64Array(steps + 1);
-  const zF = load ? stepResponse(gR, inner).y : zero;
-  const zRateF = load ? impulseResponse(gR, inner).y : zero;
-  const mF = load ? stepResponse(hg, inner).y : zero;
-  const mRateF = load ? impulseResponse(hg, inner).y : zero;
-  const r = input === 'setpoint' ? 1 : 0;
+  let zF: ArrayLike<number> = zero, zRateF: ArrayLike<number> = zero, mF: ArrayLike<number> = zero, mRateF: ArrayLike<number> = zero;
+  if (load) {
+    const inner = timeGrid(steps * h, steps + 1);
+    const hg = { num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 };
+    const ld = drive.load!;
+    const innerLoad: LoopSignal = typeof ld === 'object' ? { samples: inner.map((x) => sampledAt(ld.samples, 0, dtOut).at(x)) } : ld;
+    const zl = openResponse(gR, inner, innerLoad, h);
+    const ml = openResponse(hg, inner, innerLoad, h);
+    zF = zl.y; zRateF = zl.rate; mF = ml.y; mRateF = ml.rate;
+  }
+  const rAt = (x: number) => rSig.at(t[0] + x);
+  const rSlope = (x: number) => rSig.slope(t[0] + x);
   const zHist = new Float64Array(steps + 1);
   const mHist = new Float64Array(steps + 1);
   // Rates at each node: dz/dt for the Hermite output, dm/dt for the cubic hold of the error.
@@ -127,8 +211,8 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
   const phi = cubic ? cubic.phi : foh!.phi;
   let cmg1 = dm;
   if (foh) for (let k = 0; k < n; k++) cmg1 += cm[k] * foh.g1[k];
-  let e = r;
-  let eRate = 0;
+  let e = rAt(0);
+  let eRate = rSlope(0.5 * h);
   for (let i = 0; i <= steps; i++) {
     let zi = dz * e + zF[i], mi = dm * e + mF[i];
     let zr = czB * e + dz * eRate + zRateF[i], mr = cmB * e + dm * eRate + mRateF[i];
@@ -154,12 +238,15 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
       // e over the step is the cubic Hermite interpolant of the delayed measurement; before the
       // delayed start (j ≤ 0 from the left) the measurement is still at rest.
       const j = i + 1 - lag;
-      const eEnd = j > 0 ? r - mHist[j] : r;
-      const dEnd = j > 0 ? -mRate[j] * h : 0;
+      const rEnd = rAt((i + 1) * h);
+      const slope = rSlope((i + 0.5) * h);
+      const eEnd = j > 0 ? rEnd - mHist[j] : rEnd;
+      const dEnd = (j > 0 ? slope - mRate[j] : slope) * h;
       const dStart = eRate * h;
       for (let a = 0; a < n; a++) xn[a] = pred[a] + cubic.ge0[a] * e + cubic.ge1[a] * eEnd + cubic.gd0[a] * dStart + cubic.gd1[a] * dEnd;
-      e = j >= 0 ? r - mHist[j] : r;
-      eRate = j >= 0 ? -mRate[j] : 0;
+      const nextSlope = rSlope((i + 1.5) * h);
+      e = j >= 0 ? rEnd - mHist[j] : rEnd;
+      eRate = j >= 0 ? nextSlope - mRate[j] : nextSlope;
     } else {
       // θ < h: m at (i+1)h − θ lies inside this step and depends on e(i+1) itself (linear, solved directly).
       const g = foh!;
@@ -167,7 +254,7 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
       let beta = mF[i + 1];
       for (let a = 0; a < n; a++) pred[a] += g.g0[a] * e;
       for (let k = 0; k < n; k++) beta += cm[k] * pred[k];
-      const eNext = (r - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
+      const eNext = (rAt((i + 1) * h) - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
       for (let a = 0; a < n; a++) xn[a] = pred[a] + g.g1[a] * eNext;
       eRate = (eNext - e) / h;
       e = eNext;
@@ -176,15 +263,19 @@ export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInpu
     x = xn;
     xn = swap;
   }
-  const y = t.map((tk) => {
-    const tau = tk - t[0] - loop.plant.delay;
-    if (tau < -1e-9 * h) return 0;
+  const y = new Array<number>(t.length);
+  const rate = new Array<number>(t.length);
+  for (let k = 0; k < t.length; k++) {
+    const tau = t[k] - t[0] - loop.plant.delay;
+    if (tau < -1e-9 * h) { y[k] = 0; rate[k] = 0; continue; }
     const f = Math.max(0, tau / h);
     const j = Math.floor(f);
-    if (j >= steps) return zHist[steps];
+    if (j >= steps) { y[k] = zHist[steps]; rate[k] = zRate[steps]; continue; }
     const u = f - j;
     const u2 = u * u, u3 = u2 * u;
-    return (2 * u3 - 3 * u2 + 1) * zHist[j] + (u3 - 2 * u2 + u) * h * zRate[j] + (3 * u2 - 2 * u3) * zHist[j + 1] + (u3 - u2) * h * zRate[j + 1];
-  });
-  return { t: [...t], y };
+    y[k] = (2 * u3 - 3 * u2 + 1) * zHist[j] + (u3 - 2 * u2 + u) * h * zRate[j] + (3 * u2 - 2 * u3) * zHist[j + 1] + (u3 - u2) * h * zRate[j + 1];
+    // Derivative of the Hermite cubic.
+    rate[k] = ((6 * u2 - 6 * u) * (zHist[j] - zHist[j + 1])) / h + (3 * u2 - 4 * u + 1) * zRate[j] + (3 * u2 - 2 * u) * zRate[j + 1];
+  }
+  return { t: [...t], y, rate };
 }

@@ -12,7 +12,7 @@ export { toStateSpace, discretizeStates, cascade, type StateSpace } from './stat
 export { expm } from './matrix';
 export { timeGrid, gridStep } from './time-grid';
 export { stepResponse, impulseResponse, rampResponse, simulateInput, type TimeResponse } from './simulate';
-export { closedLoopStep, closedLoopTransferFunction, type Loop, type LoopInput } from './closed-loop';
+export { closedLoopStep, closedLoopImpulse, closedLoopResponse, closedLoopTransferFunction, type Loop, type LoopInput, type LoopDrive, type LoopSignal, type LoopResponse } from './closed-loop';
 export { stepInfo, type StepInfoOptions } from './step-info';
 export { errorIntegrals, type ErrorIntegrals } from './error-integrals';
 export { factor, magnitudeAt, phaseAt, valueAt, frequencyResponse, bode, nyquist, autoGrid, timeScales, type FactoredModel, type FrequencyResponse } from './frequency';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { closedLoopStep } from '../../../src/lib/control/closed-loop';
+import { closedLoopImpulse, closedLoopResponse, closedLoopStep } from '../../../src/lib/control/closed-loop';
 import { timeGrid } from '../../../src/lib/control/time-grid';
 import fixtures from '../../reference/fixtures/closed-loops.json';
 
@@ -47,5 +47,46 @@ describe('closedLoopStep', () => {
   it('refuses an unfiltered derivative on a plant without lag when the loop has dead time', () => {
     const t = timeGrid(10, 11);
     expect(() => closedLoopStep({ controller: { num: [1, 1], den: [1], delay: 0 }, plant: { num: [1], den: [1], delay: 1 }, sensor: unity }, t)).toThrow(/derivative filter/);
+  });
+});
+
+describe('closedLoopResponse', () => {
+  // The silo-flow loop of the fixtures: FOPDT 1/(10s+1)·e^(−2s) under PI 0.5(1 + 1/(10s)).
+  const c = fixtures.cases[0];
+  const loop = { controller: c.controller, plant: c.plant, sensor: c.sensor };
+  const t = timeGrid(60, 601);
+
+  it('gives the ramp response as the running integral of the step response (linearity), abs 1e-5', () => {
+    const step = closedLoopResponse(loop, t, { setpoint: 'step' }).y;
+    const ramp = closedLoopResponse(loop, t, { setpoint: 'ramp' }).y;
+    let integral = 0;
+    for (let k = 1; k < t.length; k++) {
+      integral += ((step[k - 1] + step[k]) / 2) * (t[k] - t[k - 1]);
+      expect(Math.abs(ramp[k] - integral)).toBeLessThan(1e-5 * Math.max(1, integral));
+    }
+  });
+
+  it('gives the impulse response as the rate of the step response (closed form 3e^(−4t) without dead time)', () => {
+    const p = { controller: { num: [3], den: [1], delay: 0 }, plant: { num: [1], den: [1, 1], delay: 0 }, sensor: unity };
+    const imp = closedLoopImpulse(p, t);
+    t.forEach((tk, i) => expect(imp.y[i]).toBeCloseTo(3 * Math.exp(-4 * tk), 10));
+    const withDelay = closedLoopImpulse(loop, t).y;
+    const step = closedLoopStep(loop, t).y;
+    for (let k = 30; k < t.length - 1; k++) expect(Math.abs(withDelay[k] - (step[k + 1] - step[k - 1]) / 0.2)).toBeLessThan(1e-3);
+  });
+
+  it('treats a sampled setpoint of ones as the step, and superposes setpoint and load', () => {
+    const sampled = closedLoopResponse(loop, t, { setpoint: { samples: t.map(() => 1) } }).y;
+    const step = closedLoopStep(loop, t).y;
+    sampled.forEach((v, i) => expect(v).toBeCloseTo(step[i], 9));
+    const both = closedLoopResponse(loop, t, { setpoint: 'step', load: 'step' }).y;
+    const load = closedLoopStep(loop, t, 'load').y;
+    both.forEach((v, i) => expect(v).toBeCloseTo(step[i] + load[i], 9));
+  });
+
+  it('treats a sampled load of t as the ramp load (rates from the input slopes: rel 1e-6)', () => {
+    const a = closedLoopResponse(loop, t, { load: { samples: t } }).y;
+    const b = closedLoopResponse(loop, t, { load: 'ramp' }).y;
+    a.forEach((v, i) => expect(Math.abs(v - b[i])).toBeLessThan(1e-6 * Math.max(1, Math.abs(b[i]))));
   });
 });
