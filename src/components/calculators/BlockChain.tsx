@@ -118,7 +118,7 @@ export default function BlockChain({ blocks, sensor, id = 'block-chain', title =
               {state.sensor ? (
                 <button type="button" className="calc-icon" aria-label="Remove the sensor block" onClick={() => change((s) => ({ ...s, sensor: null }))}>✕</button>
               ) : (
-                <button type="button" className="calc-icon" onClick={() => change((s) => ({ ...s, sensor: { kind: 'first-order', k: 1, tau: 2, label: 'Transmitter' } }))}>+ lag</button>
+                <button type="button" className="calc-icon" aria-label="Add a sensor lag" onClick={() => change((s) => ({ ...s, sensor: { kind: 'first-order', k: 1, tau: 2, label: 'Transmitter' } }))}>+ lag</button>
               )}
             </div>
             {state.sensor ? <BlockEditor block={state.sensor} onChange={(next) => change((s) => ({ ...s, sensor: next }))} testId={`${id}-sensor-block`} /> : null}

@@ -121,7 +121,7 @@ export default function FrequencyView({ model, controller, sensor, id = 'frequen
             yRange={NYQUIST_Y}
             series={[
               { label: 'L(jω), ω > 0', color: 'copper' },
-              { label: `Ms circle (Ms ${m ? formatNumber(m.ms) : '—'})`, color: 'holds', dash: [5, 4], width: 1.5 },
+              { label: '1/Ms circle around −1', color: 'holds', dash: [5, 4], width: 1.5 },
               { label: '−1', color: 'fails', dots: true },
             ]}
             data={data.nyquist}
