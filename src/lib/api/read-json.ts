@@ -1,0 +1,80 @@
+import { ApiError, tooLargeMessage, UNSUPPORTED_MEDIA_MESSAGE } from './errors';
+
+/** The largest request body any JSON route reads: 1 MB. */
+export const MAX_BODY_BYTES = 1024 * 1024;
+
+export interface ReadJsonOptions {
+  /** Largest accepted body in bytes (default 1 MB). */
+  limitBytes?: number;
+}
+
+/** `application/json` or any `application/*+json`, parameters (charset) allowed. */
+export function isJsonContentType(header: string | null): boolean {
+  if (!header) return false;
+  const type = header.split(';')[0]!.trim().toLowerCase();
+  return type === 'application/json' || /^application\/[\w.+-]+\+json$/.test(type);
+}
+
+/**
+ * Reads and parses a JSON request body. Throws ApiError: 415 `unsupported_media_type` for a
+ * body not declared as JSON, 413 `body_too_large` past the limit (stops reading there, so a
+ * huge upload costs at most the limit), 400 `invalid_json` for empty, non-UTF-8 or broken JSON.
+ */
+export async function readJson(request: Request, options: ReadJsonOptions = {}): Promise<unknown> {
+  const limit = options.limitBytes ?? MAX_BODY_BYTES;
+  if (!isJsonContentType(request.headers.get('content-type'))) {
+    throw new ApiError(415, 'unsupported_media_type', UNSUPPORTED_MEDIA_MESSAGE);
+  }
+  const declared = Number(request.headers.get('content-length'));
+  if (Number.isFinite(declared) && declared > limit) throw tooLarge(limit);
+  const text = decode(await readLimited(request, limit));
+  if (text.trim() === '') {
+    throw new ApiError(400, 'invalid_json', 'The request body is empty; send a JSON object.');
+  }
+  try {
+    return JSON.parse(text);
+  } catch (err) {
+    const reason = err instanceof Error ? err.message.replace(/\.$/, '') : 'parse error';
+    throw new ApiError(
+      400,
+      'invalid_json',
+      `The request body is not valid JSON (${reason}); check quotes, commas and brackets.`,
+    );
+  }
+}
+
+function tooLarge(limit: number): ApiError {
+  return new ApiError(413, 'body_too_large', tooLargeMessage(limit));
+}
+
+async function readLimited(request: Request, limit: number): Promise<Uint8Array> {
+  if (!request.body) return new Uint8Array(0);
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > limit) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge(limit);
+    }
+    chunks.push(value);
+  }
+  const bytes = new Uint8Array(total);
+  let offset = 0;
+  for (const chunk of chunks) {
+    bytes.set(chunk, offset);
+    offset += chunk.byteLength;
+  }
+  return bytes;
+}
+
+function decode(bytes: Uint8Array): string {
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    throw new ApiError(400, 'invalid_json', 'The request body is not valid UTF-8 text; send JSON encoded as UTF-8.');
+  }
+}

@@ -1,0 +1,20 @@
+import { z } from 'zod';
+import { tunedControllerSchema, tuneRequestSchema, ruleIdSchema } from '../../control/tuning/schema';
+
+/** The body of POST /api/v1/calc/tune: the engine's schema, refusing unknown top-level keys. */
+export const TuneRequestSchema = tuneRequestSchema.strict().meta({
+  id: 'TuneRequest',
+  description: 'A process model (fopdt, sopdt, ipdt or ultimate), a published rule and PI or PID.',
+});
+
+export type TuneRequest = z.output<typeof TuneRequestSchema>;
+
+/** The answer of POST /api/v1/calc/tune. */
+export const TuneResponseSchema = z
+  .object({
+    controller: tunedControllerSchema,
+    rule: ruleIdSchema,
+    /** The publication the formulas come from. */
+    source: z.string(),
+  })
+  .meta({ id: 'TuneResponse' });
