@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import type { ZodOpenApiOperationObject, ZodOpenApiResponsesObject } from 'zod-openapi';
+import type { ZodOpenApiOperationObject, ZodOpenApiResponseObject, ZodOpenApiResponsesObject } from 'zod-openapi';
 import { ErrorBodySchema } from './schemas/error';
 
 /** A JSON request body from a zod schema, with one worked example. */
@@ -9,7 +9,7 @@ export function jsonBody(schema: z.ZodType, example?: unknown): NonNullable<ZodO
 }
 
 /** A JSON response from a zod schema. */
-export function jsonResponse(description: string, schema: z.ZodType): ZodOpenApiResponsesObject[string] {
+export function jsonResponse(description: string, schema: z.ZodType): ZodOpenApiResponseObject {
   return { description, content: { 'application/json': { schema } } };
 }
 
@@ -28,7 +28,7 @@ const ERROR_MEANINGS: Record<number, string> = {
 
 /** The contract's error body for each listed status. */
 export function errorResponses(...statuses: number[]): ZodOpenApiResponsesObject {
-  const out: ZodOpenApiResponsesObject = {};
+  const out: Record<string, ZodOpenApiResponseObject> = {};
   for (const status of statuses) {
     const response = jsonResponse(ERROR_MEANINGS[status] ?? 'Error.', ErrorBodySchema);
     if (status === 429) {
@@ -36,5 +36,5 @@ export function errorResponses(...statuses: number[]): ZodOpenApiResponsesObject
     }
     out[String(status)] = response;
   }
-  return out;
+  return out as ZodOpenApiResponsesObject;
 }

@@ -56,8 +56,9 @@ function sentence(issue: Issue, field: string | undefined, received: unknown): s
     case 'unrecognized_keys':
       return `Remove the unknown key "${issue.keys[0]}"${field && field.includes('.') ? ` (at ${field})` : ''}; check its spelling against the API contract.`;
     case 'invalid_union':
-      if (issue.note === 'No matching discriminator' && 'options' in issue) {
-        return `${subject} must be ${oneOf(issue.options as unknown[])}, not ${describeValue(received)}.`;
+      if (issue.discriminator !== undefined && 'options' in issue && issue.options) {
+        if (received === undefined) return `Give ${subject} (${oneOf(issue.options)}); it is missing.`;
+        return `${subject} must be ${oneOf(issue.options)}, not ${describeValue(received)}.`;
       }
       return `${subject} has the wrong shape; check it against the API contract.`;
     case 'not_multiple_of':
