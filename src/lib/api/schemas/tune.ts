@@ -1,8 +1,12 @@
 import { z } from 'zod';
-import { tunedControllerSchema, tuneRequestSchema, ruleIdSchema } from '../../control/tuning/schema';
+import {
+  RuleIdSchema,
+  TunedControllerSchema,
+  TuneRequestSchema as EngineTuneRequestSchema,
+} from '../../control/tuning/schema';
 
 /** The body of POST /api/v1/calc/tune: the engine's schema, refusing unknown top-level keys. */
-export const TuneRequestSchema = tuneRequestSchema.strict().meta({
+export const TuneRequestSchema = EngineTuneRequestSchema.strict().meta({
   id: 'TuneRequest',
   description: 'A process model (fopdt, sopdt, ipdt or ultimate), a published rule and PI or PID.',
 });
@@ -12,8 +16,8 @@ export type TuneRequest = z.output<typeof TuneRequestSchema>;
 /** The answer of POST /api/v1/calc/tune. */
 export const TuneResponseSchema = z
   .object({
-    controller: tunedControllerSchema,
-    rule: ruleIdSchema,
+    controller: TunedControllerSchema,
+    rule: RuleIdSchema,
     /** The publication the formulas come from. */
     source: z.string(),
   })
