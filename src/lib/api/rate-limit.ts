@@ -40,6 +40,11 @@ export class RateLimiter {
     this.now = options.now ?? Date.now;
   }
 
+  /** Clients with a bucket in memory. */
+  get clients(): number {
+    return this.buckets.size;
+  }
+
   /** Takes one token for `client` if there is one. */
   take(client: string): RateDecision {
     const now = this.now();
