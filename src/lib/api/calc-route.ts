@@ -68,11 +68,16 @@ function failure(err: unknown, name: string): Response {
   return calculationFailed();
 }
 
-/** invalid_model for issues inside one of the model roots (not unknown keys or a `type` choice). */
+/**
+ * invalid_model for anything wrong with a model that was given (under one of the roots, e.g.
+ * `plant`, `plant.1.den.0`); invalid_request for a missing model, an unknown key, or a `type`
+ * that names a kind of model.
+ */
 export function modelRoots(...roots: string[]): CodeForPath {
-  return (path, issue) => {
-    const inside = path.length >= 2 && roots.includes(String(path[0]));
+  return (path, issue, received) => {
+    if (path.length === 0 || !roots.includes(String(path[0]))) return 'invalid_request';
+    const missing = path.length === 1 && received === undefined;
     const isChoice = issue.code === 'unrecognized_keys' || path[path.length - 1] === 'type';
-    return inside && !isChoice ? 'invalid_model' : 'invalid_request';
+    return missing || isChoice ? 'invalid_request' : 'invalid_model';
   };
 }

@@ -6,7 +6,7 @@ type Issue = z.core.$ZodIssue;
 type Path = readonly PropertyKey[];
 
 /** Chooses the contract code for an issue at a path (e.g. `invalid_model` under `plant`). */
-export type CodeForPath = (path: readonly (string | number)[], issue: Issue) => string;
+export type CodeForPath = (path: readonly (string | number)[], issue: Issue, received: unknown) => string;
 
 /** The dotted field path of the contract: `plant.1.den.0`. */
 export function dottedPath(path: Path): string | undefined {
@@ -23,9 +23,10 @@ export function issueToApiError(error: z.ZodError, input: unknown, codeFor: Code
   const keys = path.map((k) => (typeof k === 'number' ? k : String(k)));
   const target = issue.code === 'unrecognized_keys' ? [...keys, issue.keys[0]!] : keys;
   const field = dottedPath(target);
+  const received = valueAt(input, keys);
   const named = issue.code === 'custom' ? issue.params?.code : undefined;
-  const code = typeof named === 'string' ? named : codeFor(target, issue);
-  return new ApiError(400, code, sentence(issue, field, valueAt(input, keys)), field);
+  const code = typeof named === 'string' ? named : codeFor(target, issue, received);
+  return new ApiError(400, code, sentence(issue, field, received), field);
 }
 
 /**

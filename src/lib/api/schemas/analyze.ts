@@ -6,8 +6,8 @@ import { ProperTransferFunctionSchema } from './transfer-function';
 export const MAX_POINTS = 100_000;
 /** Most frequencies one request may ask for. */
 export const MAX_FREQUENCIES = 100_000;
-/** Most transfer functions in series in `plant`. */
-export const MAX_SERIES = 10;
+/** Most transfer functions in series in `plant` (the engine's limit). */
+export const MAX_SERIES = 20;
 
 /** A PID controller in one of the contract's three forms; unknown keys (a typo like `Ti`) are refused. */
 export const ControllerRequestSchema = z
@@ -28,21 +28,27 @@ export const StepRequestSchema = z
 
 export const FrequencyRequestSchema = z
   .object({
-    /** Frequencies in rad/s, each finite and > 0. */
-    w: z.array(z.number().positive()).min(1).max(MAX_FREQUENCIES),
+    /** Frequencies in rad/s, each finite and > 0; an automatic logarithmic grid when absent. */
+    w: z.array(z.number().positive()).min(1).max(MAX_FREQUENCIES).optional(),
+    /** Points of the automatic grid (default 200) when w is absent. */
+    points: z.int().min(2).max(MAX_FREQUENCIES).optional(),
   })
-  .strict();
+  .strict()
+  .meta({ description: 'Frequency response of L (or G·H); w in rad/s.' });
 
 export const AnalysesRequestSchema = z
   .object({
-    step: StepRequestSchema.optional(),
-    frequency: FrequencyRequestSchema.optional(),
+    /** true for the defaults, or the settings. */
+    step: z.union([z.boolean(), StepRequestSchema]).optional(),
+    /** true for the automatic grid, or the settings. */
+    frequency: z.union([z.boolean(), FrequencyRequestSchema]).optional(),
     /** Gain and phase margins, delay margin and peak sensitivity of L. */
     margins: z.boolean().optional(),
     /** Poles and zeros of the rational part, and closed-loop stability. */
     poles: z.boolean().optional(),
   })
-  .strict();
+  .strict()
+  .meta({ description: 'What to compute; when absent, every analysis runs with its defaults.' });
 
 /** The body of POST /api/v1/calc/analyze. */
 export const AnalyzeRequestSchema = z
@@ -53,7 +59,7 @@ export const AnalyzeRequestSchema = z
     sensor: ProperTransferFunctionSchema.optional(),
     /** Without it, everything is of the open path G·H. */
     controller: ControllerRequestSchema.optional(),
-    analyses: AnalysesRequestSchema.default({}),
+    analyses: AnalysesRequestSchema.optional(),
   })
   .strict()
   .meta({ id: 'AnalyzeRequest' });
