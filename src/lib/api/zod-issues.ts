@@ -19,7 +19,9 @@ export function dottedPath(path: Path): string | undefined {
  * name its code in `params.code`; otherwise `codeFor` decides.
  */
 export function issueToApiError(error: z.ZodError, input: unknown, codeFor: CodeForPath): ApiError {
-  const { issue, path } = innermost(error.issues[0]!, []);
+  // An unknown key is most often a typo of a required one; naming it helps more than "missing".
+  const first = error.issues.find((i) => i.code === 'unrecognized_keys') ?? error.issues[0]!;
+  const { issue, path } = innermost(first, []);
   const keys = path.map((k) => (typeof k === 'number' ? k : String(k)));
   const target = issue.code === 'unrecognized_keys' ? [...keys, issue.keys[0]!] : keys;
   const field = dottedPath(target);

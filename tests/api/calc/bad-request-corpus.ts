@@ -93,7 +93,7 @@ export const badRequests: BadRequest[] = [
   row('an unknown tuning option', tune({ model: fopdt, rule: 'simc', controller: 'pi', options: { tauc: 5 } }), 400, 'invalid_request', 'options.tauc'),
   // Identify
   row('a step test of 9 samples', identify({ t: times.slice(0, 9), y: response.slice(0, 9), model: 'fopdt' }), 400, 'invalid_request', 't'),
-  row('unsorted sample times', identify({ t: [...times.slice(0, 5), 4.5, ...times.slice(6)], y: response, model: 'fopdt' }), 400, 'invalid_request', 't.5'),
+  row('unsorted sample times', identify({ t: [...times.slice(0, 5), 3.5, ...times.slice(6)], y: response, model: 'fopdt' }), 400, 'invalid_request', 't.5'),
   row('a repeated sample time', identify({ t: [0, 1, 2, 2, ...times.slice(4)], y: response, model: 'fopdt' }), 400, 'invalid_request', 't.3'),
   row('y shorter than t', identify({ t: times, y: response.slice(0, 15), model: 'fopdt' }), 400, 'invalid_request', 'y'),
   row('"NaN" as text among the samples', identify({ t: times, y: response.map((v, i) => (i === 7 ? 'NaN' : v)), model: 'fopdt' }), 400, 'invalid_request', 'y.7'),
