@@ -65,7 +65,7 @@ export const badRequests: BadRequest[] = [
   row('a controller gain as text', withController({ form: 'ideal', kc: '2.1' }), 400, 'invalid_request', 'controller.kc'),
   row('a negative integral time', withController({ form: 'ideal', kc: 2, ti: -11 }), 400, 'invalid_request', 'controller.ti'),
   row('a typo Ti for ti', withController({ form: 'series', kc: 2, Ti: 11 }), 400, 'invalid_request', 'controller.Ti'),
-  row('a parallel PID given kc instead of kp', withController({ form: 'parallel', kc: 2, ki: 0.2 }), 400, 'invalid_request', 'controller.kp'),
+  row('a parallel PID given kc instead of kp', withController({ form: 'parallel', kc: 2, ki: 0.2 }), 400, 'invalid_request', 'controller.kc'),
   row('a zero derivative filter divisor', withController({ form: 'ideal', kc: 2, ti: 11, td: 1, n: 0 }), 400, 'invalid_request', 'controller.n'),
   // Analyses
   row('10^7 step points', withAnalyses({ step: { points: 1e7 } }), 400, 'invalid_request', 'analyses.step.points'),
