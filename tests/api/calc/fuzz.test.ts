@@ -38,6 +38,13 @@ const nearValidBody: fc.Arbitrary<CalcCall> = fc
 
 const validate = responseValidator();
 
+/** The body in flight, so that a run that hangs in the engine leaves its culprit behind. */
+const inFlight = artifactPath('calc-fuzz-in-flight.json');
+async function send(call: CalcCall, via: (call: CalcCall) => Promise<CalcAnswer>): Promise<CalcAnswer> {
+  fs.writeFileSync(inFlight, JSON.stringify(call));
+  return via(call);
+}
+
 /** What every answer must be: below 500, the contract's error body unless 200, the documented shape when 200. */
 function check(call: CalcCall, answer: CalcAnswer, unexpected: unknown[], tally?: Map<number, number>): void {
   tally?.set(answer.status, (tally.get(answer.status) ?? 0) + 1);
@@ -64,16 +71,16 @@ describe('calculation routes in-process, random bodies', () => {
   });
 
   it('never answers 5xx to arbitrary JSON', { timeout: 300_000 }, async () => {
-    await fc.assert(fc.asyncProperty(arbitraryBody, async (call) => check(call, await callInProcess(call), unexpected)), { numRuns: 2000 });
+    await fc.assert(fc.asyncProperty(arbitraryBody, async (call) => check(call, await send(call, callInProcess), unexpected)), { numRuns: 2000 });
   });
 
   it('never answers 5xx to broken or overflowing JSON text', { timeout: 300_000 }, async () => {
-    await fc.assert(fc.asyncProperty(rawBody, async (call) => check(call, await callInProcess(call), unexpected)), { numRuns: 1000 });
+    await fc.assert(fc.asyncProperty(rawBody, async (call) => check(call, await send(call, callInProcess), unexpected)), { numRuns: 1000 });
   });
 
   it('never answers 5xx to near-valid mutations of the worked examples', { timeout: 600_000 }, async () => {
     const tally = new Map<number, number>();
-    await fc.assert(fc.asyncProperty(nearValidBody, async (call) => check(call, await callInProcess(call), unexpected, tally)), { numRuns: 3000 });
+    await fc.assert(fc.asyncProperty(nearValidBody, async (call) => check(call, await send(call, callInProcess), unexpected, tally)), { numRuns: 3000 });
     // The mutations must reach the engine often enough to test it, not only the schemas.
     expect(tally.get(200) ?? 0).toBeGreaterThan(300);
     expect(tally.has(429)).toBe(false);
@@ -90,7 +97,7 @@ describe('calculation routes over HTTP, random bodies', () => {
 
   it('never answers 5xx to a sample of arbitrary and near-valid bodies', { timeout: 300_000 }, async () => {
     const body = fc.oneof(arbitraryBody, rawBody, nearValidBody, nearValidBody);
-    await fc.assert(fc.asyncProperty(body, async (call) => check(call, await callOverHttp(server.url, call), unexpected)), { numRuns: 300 });
+    await fc.assert(fc.asyncProperty(body, async (call) => check(call, await send(call, (c) => callOverHttp(server.url, c)), unexpected)), { numRuns: 300 });
     expect(server.output()).not.toMatch(/\n\s+at .*\.mjs:\d+/); // no stack trace from a 5xx
   });
 });

@@ -3,7 +3,7 @@ import { z } from 'zod';
 /** A number, or null where the contract says the figure is undefined. */
 const maybe = (description: string) => z.number().nullable().meta({ description });
 
-export const StepInfoSchema = z.object({
+export const StepInfoSchema = z.looseObject({
   finalValue: maybe('Steady-state value; null when unstable or integrating.'),
   riseTime: maybe('s, from first reaching 10 % to first reaching 90 % of finalValue.'),
   settlingTime: maybe('s from t = 0, the last time |y − finalValue| > 2 % of |finalValue|; null if not settled by tFinal.'),
@@ -12,7 +12,7 @@ export const StepInfoSchema = z.object({
   peakTime: maybe('s, the time of peak.'),
 });
 
-export const StepResponseSchema = z.object({
+export const StepResponseSchema = z.looseObject({
   /** Sample times, s, evenly spaced from 0 to tFinal. */
   t: z.array(z.number()),
   /** Response at each sample. */
@@ -20,7 +20,7 @@ export const StepResponseSchema = z.object({
   info: StepInfoSchema,
 });
 
-export const FrequencyResponseSchema = z.object({
+export const FrequencyResponseSchema = z.looseObject({
   /** rad/s. */
   w: z.array(z.number()),
   /** |L(jw)|, plain ratio. */
@@ -29,7 +29,7 @@ export const FrequencyResponseSchema = z.object({
   phaseDeg: z.array(z.number()),
 });
 
-export const MarginsSchema = z.object({
+export const MarginsSchema = z.looseObject({
   gainMargin: maybe('1/|L| at the phase crossover, plain ratio.'),
   gainMarginDb: maybe('gainMargin in dB.'),
   phaseCrossover: maybe('rad/s, lowest w > 0 where the phase crosses −180° (mod 360).'),
@@ -39,11 +39,11 @@ export const MarginsSchema = z.object({
   ms: z.number().meta({ description: 'Peak sensitivity, max over w of 1/|1 + L(jw)|.' }),
 });
 
-const ComplexSchema = z.object({ re: z.number(), im: z.number() });
+const ComplexSchema = z.looseObject({ re: z.number(), im: z.number() });
 
 /** The answer of POST /api/v1/calc/analyze; each part present when it was asked for. */
 export const AnalyzeResponseSchema = z
-  .object({
+  .looseObject({
     step: StepResponseSchema.optional(),
     frequency: FrequencyResponseSchema.optional(),
     margins: MarginsSchema.optional(),

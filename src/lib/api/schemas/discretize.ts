@@ -15,7 +15,7 @@ export type DiscretizeRequest = z.output<typeof DiscretizeRequestSchema>;
 
 /** The answer: descending powers of z, den[0] = 1, and the dead time in whole samples. */
 export const DiscretizeResponseSchema = z
-  .object({
+  .looseObject({
     num: z.array(z.number()),
     den: z.array(z.number()),
     /** Dead time as a whole number of samples. */

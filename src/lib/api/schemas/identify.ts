@@ -14,13 +14,13 @@ export type IdentifyRequest = z.output<typeof IdentifyRequestSchema>;
 
 /** The answer of POST /api/v1/calc/identify. Times in s; k a plain ratio (ipdt: 1/s). */
 export const IdentifyResponseSchema = z
-  .object({
+  .looseObject({
     model: z.discriminatedUnion('type', [
-      z.object({ type: z.literal('fopdt'), k: z.number(), tau: z.number(), theta: z.number() }),
-      z.object({ type: z.literal('sopdt'), k: z.number(), tau1: z.number(), tau2: z.number(), theta: z.number() }),
-      z.object({ type: z.literal('ipdt'), k: z.number(), theta: z.number() }),
+      z.looseObject({ type: z.literal('fopdt'), k: z.number(), tau: z.number(), theta: z.number() }),
+      z.looseObject({ type: z.literal('sopdt'), k: z.number(), tau1: z.number(), tau2: z.number(), theta: z.number() }),
+      z.looseObject({ type: z.literal('ipdt'), k: z.number(), theta: z.number() }),
     ]),
-    fit: z.object({
+    fit: z.looseObject({
       /** Root-mean-square error of the fit, PV units. */
       rmse: z.number(),
       /** Coefficient of determination. */

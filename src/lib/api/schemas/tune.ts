@@ -15,8 +15,8 @@ export type TuneRequest = z.output<typeof TuneRequestSchema>;
 
 /** The answer of POST /api/v1/calc/tune. */
 export const TuneResponseSchema = z
-  .object({
-    controller: TunedControllerSchema,
+  .looseObject({
+    controller: TunedControllerSchema.loose(),
     rule: RuleIdSchema,
     /** The publication the formulas come from. */
     source: z.string(),
