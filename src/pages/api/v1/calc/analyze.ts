@@ -1,5 +1,6 @@
 import { calcRoute, modelRoots } from '../../../../lib/api/calc-route';
 import { AnalyzeRequestSchema } from '../../../../lib/api/schemas/analyze';
+import { checkTimeScaleSpread } from '../../../../lib/api/time-scale-spread';
 import { analyze } from '../../../../lib/control/analyze';
 
 /**
@@ -10,5 +11,8 @@ export const { POST, ALL } = calcRoute({
   name: 'analyze',
   schema: AnalyzeRequestSchema,
   codeFor: modelRoots('plant', 'sensor'),
-  run: (request) => analyze(request),
+  run: (request) => {
+    checkTimeScaleSpread(request);
+    return analyze(request);
+  },
 });

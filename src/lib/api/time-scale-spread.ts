@@ -1,0 +1,62 @@
+import { roots } from '../control/roots';
+import { ApiError } from './errors';
+import type { AnalyzeRequest } from './schemas/analyze';
+
+/**
+ * Largest accepted ratio of a closed loop's dead time to its fastest time constant. The
+ * engine's closed-loop simulation and stability test with dead time take time in proportion to
+ * this ratio (about 0.7 s at 2·10^4 on this hardware, a minute at 2·10^6), so the API refuses
+ * wider spreads rather than hold a server thread. A lag that much faster than the dead time does
+ * not change the loop's response at the time scale of the dead time.
+ */
+export const MAX_DELAY_TO_FASTEST_LAG = 2e4;
+
+interface Lag {
+  /** Time constant, s. */
+  seconds: number;
+  /** Request field that holds it. */
+  field: string;
+}
+
+function fastestPoleLag(den: readonly number[], field: string): Lag | null {
+  const rates = roots(den).map((p) => Math.hypot(p.re, p.im)).filter((r) => r > 0 && Number.isFinite(r));
+  return rates.length === 0 ? null : { seconds: 1 / Math.max(...rates), field };
+}
+
+function controllerLag(c: NonNullable<AnalyzeRequest['controller']>): Lag | null {
+  if (c.form === 'parallel') return c.tf && c.tf > 0 ? { seconds: c.tf, field: 'controller.tf' } : null;
+  return c.td && c.td > 0 ? { seconds: c.td / (c.n ?? 10), field: 'controller.td' } : null;
+}
+
+/**
+ * Refuses (400 invalid_request at the fastest lag's field) a closed loop with dead time whose
+ * dead time exceeds MAX_DELAY_TO_FASTEST_LAG times its fastest time constant, when a step
+ * response or the stability verdict is asked for. Open paths and loops without dead time pass.
+ */
+export function checkTimeScaleSpread(request: AnalyzeRequest): void {
+  if (!request.controller) return;
+  const a = request.analyses;
+  const simulates = a === undefined || Boolean(a.step) || Boolean(a.poles);
+  if (!simulates) return;
+  const plants = Array.isArray(request.plant) ? request.plant : [request.plant];
+  const delay = [...plants, request.sensor].reduce((sum, g) => sum + (g?.delay ?? 0), 0);
+  if (delay === 0) return;
+  const lags = [
+    ...plants.map((g, i) => fastestPoleLag(g.den, Array.isArray(request.plant) ? `plant.${i}.den` : 'plant.den')),
+    request.sensor ? fastestPoleLag(request.sensor.den, 'sensor.den') : null,
+    controllerLag(request.controller),
+  ].filter((lag): lag is Lag => lag !== null);
+  if (lags.length === 0) return;
+  const fastest = lags.reduce((a, b) => (b.seconds < a.seconds ? b : a));
+  if (delay <= MAX_DELAY_TO_FASTEST_LAG * fastest.seconds) return;
+  throw new ApiError(
+    400,
+    'invalid_request',
+    `The loop's dead time (${fmt(delay)} s) is more than ${MAX_DELAY_TO_FASTEST_LAG.toLocaleString('en-US')} times its fastest time constant (${fmt(fastest.seconds)} s at ${fastest.field}); leave out a lag that fast, since it does not change the response at this time scale.`,
+    fastest.field,
+  );
+}
+
+function fmt(x: number): string {
+  return Number(x.toPrecision(3)).toString();
+}
