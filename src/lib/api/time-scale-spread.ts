@@ -19,8 +19,11 @@ interface Lag {
 }
 
 function fastestPoleLag(den: readonly number[], field: string): Lag | null {
-  const rates = roots(den).map((p) => Math.hypot(p.re, p.im)).filter((r) => r > 0 && Number.isFinite(r));
-  return rates.length === 0 ? null : { seconds: 1 / Math.max(...rates), field };
+  const rates = roots(den).map((p) => Math.hypot(p.re, p.im));
+  // A pole too fast to compute (overflow) counts as instantaneous.
+  if (rates.some((r) => !Number.isFinite(r))) return { seconds: 0, field };
+  const moving = rates.filter((r) => r > 0);
+  return moving.length === 0 ? null : { seconds: 1 / Math.max(...moving), field };
 }
 
 function controllerLag(c: NonNullable<AnalyzeRequest['controller']>): Lag | null {
