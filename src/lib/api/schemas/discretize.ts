@@ -2,6 +2,9 @@ import { z } from 'zod';
 import { DiscretizeRequestSchema as EngineDiscretizeRequestSchema } from '../../control/discretize';
 import { ProperTransferFunctionSchema } from './transfer-function';
 
+/** Most whole samples of dead time a discrete model may carry (a PLC's delay buffer, at most). */
+export const MAX_DELAY_SAMPLES = 1_000_000;
+
 /**
  * The body of POST /api/v1/calc/discretize: the engine's schema with the model checks of the
  * calculation routes on `tf`, refusing unknown keys. The engine refuses a dead time that is not
@@ -9,6 +12,16 @@ import { ProperTransferFunctionSchema } from './transfer-function';
  */
 export const DiscretizeRequestSchema = EngineDiscretizeRequestSchema.extend({ tf: ProperTransferFunctionSchema })
   .strict()
+  .superRefine((req, ctx) => {
+    if (!(req.tf.delay / req.ts <= MAX_DELAY_SAMPLES)) {
+      ctx.addIssue({
+        code: 'custom',
+        params: { code: 'invalid_request' },
+        path: ['tf', 'delay'],
+        message: `The dead time is more than ${MAX_DELAY_SAMPLES.toLocaleString('en-US')} samples of ts; choose a longer sample time.`,
+      });
+    }
+  })
   .meta({ id: 'DiscretizeRequest' });
 
 export type DiscretizeRequest = z.output<typeof DiscretizeRequestSchema>;
