@@ -1,6 +1,6 @@
 import { calcRoute, modelRoots } from '../../../../lib/api/calc-route';
 import { AnalyzeRequestSchema } from '../../../../lib/api/schemas/analyze';
-import { checkTimeScaleSpread } from '../../../../lib/api/time-scale-spread';
+import { checkLoopBudget } from '../../../../lib/api/loop-budget';
 import { analyze } from '../../../../lib/control/analyze';
 
 /**
@@ -12,7 +12,7 @@ export const { POST, ALL } = calcRoute({
   schema: AnalyzeRequestSchema,
   codeFor: modelRoots('plant', 'sensor'),
   run: (request) => {
-    checkTimeScaleSpread(request);
+    checkLoopBudget(request);
     return analyze(request);
   },
 });

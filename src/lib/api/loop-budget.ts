@@ -1,6 +1,13 @@
+import { analyze } from '../control/analyze';
 import { roots } from '../control/roots';
 import { ApiError } from './errors';
 import type { AnalyzeRequest } from './schemas/analyze';
+
+/**
+ * Limits on closed loops with dead time, checked before the engine simulates them. Both bound
+ * work that grows without limit in the engine's closed-loop simulation and stability test, and
+ * both only refuse loops no one would build: see DEVELOPERS.md ("Calculation API").
+ */
 
 /**
  * Largest accepted ratio of a closed loop's dead time to its fastest time constant. The
@@ -32,11 +39,20 @@ function controllerLag(c: NonNullable<AnalyzeRequest['controller']>): Lag | null
 }
 
 /**
- * Refuses (400 invalid_request at the fastest lag's field) a closed loop with dead time whose
- * dead time exceeds MAX_DELAY_TO_FASTEST_LAG times its fastest time constant, when a step
- * response or the stability verdict is asked for. Open paths and loops without dead time pass.
+ * Largest accepted product of the highest gain-crossover frequency (rad/s) and the dead time
+ * (s). A designed loop has it below π/2 (else it has no phase margin); above 1000 rad the loop
+ * has hundreds of unstable oscillatory modes, and each one costs the engine time.
  */
-export function checkTimeScaleSpread(request: AnalyzeRequest): void {
+export const MAX_CROSSOVER_TIMES_DELAY = 1000;
+
+/**
+ * Refuses with 400 invalid_request a closed loop with dead time, when a step response or the
+ * stability verdict is asked for, whose dead time exceeds MAX_DELAY_TO_FASTEST_LAG times its
+ * fastest time constant (field: that lag) or whose highest gain crossover times the dead time
+ * exceeds MAX_CROSSOVER_TIMES_DELAY (field: `controller`). Open paths and loops without dead
+ * time pass.
+ */
+export function checkLoopBudget(request: AnalyzeRequest): void {
   if (!request.controller) return;
   const a = request.analyses;
   const simulates = a === undefined || Boolean(a.step) || Boolean(a.poles);
@@ -49,10 +65,26 @@ export function checkTimeScaleSpread(request: AnalyzeRequest): void {
     request.sensor ? fastestPoleLag(request.sensor.den, 'sensor.den') : null,
     controllerLag(request.controller),
   ].filter((lag): lag is Lag => lag !== null);
-  if (lags.length === 0) return;
-  const fastest = lags.reduce((a, b) => (b.seconds < a.seconds ? b : a));
-  if (delay <= MAX_DELAY_TO_FASTEST_LAG * fastest.seconds) return;
+  const fastest = lags.reduce<Lag | null>((a, b) => (a === null || b.seconds < a.seconds ? b : a), null);
+  if (fastest && delay > MAX_DELAY_TO_FASTEST_LAG * fastest.seconds) throw spreadError(delay, fastest);
+  checkCrossover(request, delay);
+}
+
+/** The frequency sweep is cheap: take the highest crossover from it before simulating. */
+function checkCrossover(request: AnalyzeRequest, delay: number): void {
+  const crossovers = analyze({ ...request, analyses: { margins: true } }).margins?.gainCrossovers ?? [];
+  const highest = crossovers.length ? Math.max(...crossovers) : 0;
+  if (!(highest * delay > MAX_CROSSOVER_TIMES_DELAY)) return;
   throw new ApiError(
+    400,
+    'invalid_request',
+    `The loop gain stays above 1 up to ${fmt(highest)} rad/s, which with ${fmt(delay)} s of dead time makes the loop violently unstable; lower the controller gain (or check the process gain).`,
+    'controller',
+  );
+}
+
+function spreadError(delay: number, fastest: Lag): ApiError {
+  return new ApiError(
     400,
     'invalid_request',
     `The loop's dead time (${fmt(delay)} s) is more than ${MAX_DELAY_TO_FASTEST_LAG.toLocaleString('en-US')} times its fastest time constant (${fmt(fastest.seconds)} s at ${fastest.field}); leave out a lag that fast, since it does not change the response at this time scale.`,
