@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { IdealPidSchema, ParallelPidSchema, SeriesPidSchema } from '../../schemas';
+import { magnitudeMessage, reasonableMagnitude } from './magnitude';
 import { ProperTransferFunctionSchema } from './transfer-function';
 
 /** Most samples a step response may ask for (the contract's limit). */
@@ -12,12 +13,20 @@ export const MAX_SERIES = 20;
 /** A PID controller in one of the contract's three forms; unknown keys (a typo like `Ti`) are refused. */
 export const ControllerRequestSchema = z
   .discriminatedUnion('form', [IdealPidSchema.strict(), SeriesPidSchema.strict(), ParallelPidSchema.strict()])
+  .superRefine((c, ctx) => {
+    for (const [key, value] of Object.entries(c)) {
+      if (typeof value === 'number' && !reasonableMagnitude(value)) {
+        ctx.addIssue({ code: 'custom', path: [key], message: magnitudeMessage(value) });
+        return;
+      }
+    }
+  })
   .meta({ id: 'PidController', description: 'ideal, series or parallel PID; times in s.' });
 
 export const StepRequestSchema = z
   .object({
     /** End of the simulated horizon, s; chosen so the response settles when absent. */
-    tFinal: z.number().positive().optional(),
+    tFinal: z.number().positive().max(1e100).optional(),
     /** Evenly spaced samples from 0 to tFinal inclusive. */
     points: z.int().min(2).max(MAX_POINTS).default(1001),
     /** Which unit step: the setpoint (Y/R) or a load at the plant input (Y/D). */
@@ -29,7 +38,7 @@ export const StepRequestSchema = z
 export const FrequencyRequestSchema = z
   .object({
     /** Frequencies in rad/s, each finite and > 0; an automatic logarithmic grid when absent. */
-    w: z.array(z.number().positive()).min(1).max(MAX_FREQUENCIES).optional(),
+    w: z.array(z.number().positive().max(1e100).refine(reasonableMagnitude, 'Frequencies must lie within 1e-100 to 1e100 rad/s.')).min(1).max(MAX_FREQUENCIES).optional(),
     /** Points of the automatic grid (default 200) when w is absent. */
     points: z.int().min(2).max(MAX_FREQUENCIES).optional(),
   })

@@ -1,14 +1,12 @@
 import { z } from 'zod';
 import { TransferFunctionSchema } from '../../schemas';
+import { magnitudeMessage, reasonableMagnitude } from './magnitude';
 
 /** The contract's limit on the order of each transfer function given. */
 export const MAX_ORDER = 20;
 
 /** Custom issues name their contract code in `params.code`. */
 const MODEL = { code: 'invalid_model' };
-
-/** Coefficients beyond this magnitude (or non-zero below its inverse) overflow products of blocks. */
-export const MAX_COEFFICIENT = 1e100;
 
 /** Degree of a coefficient list (descending powers) once leading zeros are dropped; null if all zero. */
 export function degreeOf(coefficients: readonly number[]): number | null {
@@ -24,16 +22,15 @@ export function degreeOf(coefficients: readonly number[]): number | null {
 export const ProperTransferFunctionSchema = TransferFunctionSchema.strict()
   .superRefine((tf, ctx) => {
     for (const key of ['num', 'den'] as const) {
-      const at = tf[key].findIndex((c) => c !== 0 && (Math.abs(c) > MAX_COEFFICIENT || Math.abs(c) < 1 / MAX_COEFFICIENT));
+      const at = tf[key].findIndex((c) => !reasonableMagnitude(c));
       if (at >= 0) {
-        ctx.addIssue({
-          code: 'custom',
-          params: MODEL,
-          path: [key, at],
-          message: `The coefficient ${tf[key][at]} is outside 1e-100 to 1e100 in magnitude; rescale the model (change its time or gain units).`,
-        });
+        ctx.addIssue({ code: 'custom', params: MODEL, path: [key, at], message: magnitudeMessage(tf[key][at]!) });
         return;
       }
+    }
+    if (!reasonableMagnitude(tf.delay)) {
+      ctx.addIssue({ code: 'custom', params: MODEL, path: ['delay'], message: magnitudeMessage(tf.delay) });
+      return;
     }
     const denDegree = degreeOf(tf.den);
     const numDegree = degreeOf(tf.num);
