@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DiscretizeRequestSchema as EngineDiscretizeRequestSchema } from '../../control/discretize';
+import { reasonableMagnitude } from './magnitude';
 import { ProperTransferFunctionSchema } from './transfer-function';
 
 /** Most whole samples of dead time a discrete model may carry (a PLC's delay buffer, at most). */
@@ -10,7 +11,11 @@ export const MAX_DELAY_SAMPLES = 1_000_000;
  * calculation routes on `tf`, refusing unknown keys. The engine refuses a dead time that is not
  * a whole number of samples (within 1e-9 relative) with invalid_request at `tf.delay`.
  */
-export const DiscretizeRequestSchema = EngineDiscretizeRequestSchema.extend({ tf: ProperTransferFunctionSchema })
+export const DiscretizeRequestSchema = EngineDiscretizeRequestSchema.extend({
+  tf: ProperTransferFunctionSchema,
+  /** Sample time, s. */
+  ts: z.number().positive().refine(reasonableMagnitude, 'The sample time must lie within 1e-100 to 1e100 s.'),
+})
   .strict()
   .superRefine((req, ctx) => {
     if (!(req.tf.delay / req.ts <= MAX_DELAY_SAMPLES)) {
