@@ -70,15 +70,22 @@ export function checkLoopBudget(request: AnalyzeRequest): void {
   checkCrossover(request, delay);
 }
 
-/** The frequency sweep is cheap: take the highest crossover from it before simulating. */
+/**
+ * Frequency evaluations are cheap: take the highest crossover from the margin scan, and look at
+ * |L| on a grid above MAX_CROSSOVER_TIMES_DELAY/delay, where the scan may not reach.
+ */
 function checkCrossover(request: AnalyzeRequest, delay: number): void {
-  const crossovers = analyze({ ...request, analyses: { margins: true } }).margins?.gainCrossovers ?? [];
-  const highest = crossovers.length ? Math.max(...crossovers) : 0;
+  const edge = MAX_CROSSOVER_TIMES_DELAY / delay;
+  const w = Array.from({ length: 13 }, (_, i) => edge * 10 ** (i / 2));
+  const out = analyze({ ...request, analyses: { margins: true, frequency: { w } } });
+  const crossovers = out.margins?.gainCrossovers ?? [];
+  const aboveOne = (out.frequency?.w ?? []).filter((_, i) => !(out.frequency!.mag[i]! < 1));
+  const highest = Math.max(0, ...crossovers, ...aboveOne);
   if (!(highest * delay > MAX_CROSSOVER_TIMES_DELAY)) return;
   throw new ApiError(
     400,
     'invalid_request',
-    `The loop gain stays above 1 up to ${fmt(highest)} rad/s, which with ${fmt(delay)} s of dead time makes the loop violently unstable; lower the controller gain (or check the process gain).`,
+    `The loop gain stays above 1 at least up to ${fmt(highest)} rad/s, which with ${fmt(delay)} s of dead time makes the loop violently unstable; lower the controller gain (or check the process gain).`,
     'controller',
   );
 }
