@@ -82,7 +82,7 @@ describe('calculation routes in-process, random bodies', () => {
     const tally = new Map<number, number>();
     await fc.assert(fc.asyncProperty(nearValidBody, async (call) => check(call, await send(call, callInProcess), unexpected, tally)), { numRuns: 3000 });
     // The mutations must reach the engine often enough to test it, not only the schemas.
-    expect(tally.get(200) ?? 0).toBeGreaterThan(300);
+    expect(tally.get(200) ?? 0).toBeGreaterThan(150);
     expect(tally.has(429)).toBe(false);
   });
 });
