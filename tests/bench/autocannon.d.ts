@@ -5,11 +5,15 @@ declare module 'autocannon' {
     connections?: number;
     duration?: number;
     headers?: Record<string, string>;
+    method?: string;
+    body?: string;
   }
   interface Result {
-    requests: { average: number };
+    requests: { average: number; total: number };
     latency: { p50: number; p99: number };
     non2xx: number;
+    errors: number;
+    timeouts: number;
   }
   export default function autocannon(options: Options): Promise<Result>;
 }
