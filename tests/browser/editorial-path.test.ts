@@ -56,6 +56,7 @@ describe('the editorial path in the browser', () => {
     await editor.locator('input[name=title]').fill('Glycol chiller supply temperature');
     await editor.locator('textarea[name=summary]').fill('Holds the quenchwater glycol supply at 1 °C for the yoghurt cooling tunnel.');
     await editor.locator('input[name=loopTags]').fill('TIC-610');
+    await editor.locator('select[name=area]').selectOption('glycol');
     // The preview compiles the template's body on the server and hydrates its calculators.
     await expect.poll(() => page.getByTestId('preview-html').locator('[data-island="LoopResponse"][data-hydrated="true"]').count(), { timeout: 20_000 }).toBe(1);
     // A body that is not allowed shows its line in the preview, and the typed text stays.

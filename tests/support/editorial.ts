@@ -43,5 +43,15 @@ export const SAMPLE_BODY = [
 ].join('\n');
 
 export function sampleRecipe(title: string) {
-  return { title, summary: 'Holds the CIP return temperature on the caustic wash within two degrees.', loopType: 'temperature', body: SAMPLE_BODY };
+  return {
+    title,
+    summary: 'Holds the CIP return temperature on the caustic wash within two degrees.',
+    loopType: 'temperature',
+    area: 'cip',
+    loopTags: ['TIC-540'],
+    units: { pv: '°C', mv: '% valve' },
+    model: { type: 'fopdt', k: 0.7, tau: 90, theta: 25 },
+    controller: { form: 'ideal', kc: 1.1, ti: 90 },
+    body: SAMPLE_BODY,
+  };
 }

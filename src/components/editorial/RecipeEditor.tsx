@@ -13,6 +13,10 @@ export interface EditorFields {
   loopType: string;
   area: string;
   loopTags: string;
+  /** Unit of the measurement, e.g. °C. */
+  pvUnit: string;
+  /** Unit of the controller output, e.g. % valve. */
+  mvUnit: string;
   tags: string;
   cautions: string;
   model: ModelValue | null;
@@ -28,6 +32,8 @@ export interface RecipeEditorProps {
   /** Whether the signed-in person may submit it (its owner). */
   canSubmit?: boolean;
   loopTypes: string[];
+  /** The plant's process areas (code and name). */
+  areas: { code: string; name: string }[];
   initial: EditorFields;
 }
 
@@ -45,7 +51,8 @@ function payload(f: EditorFields) {
     loopType: f.loopType,
     body: f.body,
     ...(f.area.trim() ? { area: f.area.trim() } : {}),
-    loopTags: list(f.loopTags),
+    ...(list(f.loopTags).length ? { loopTags: list(f.loopTags) } : {}),
+    ...(f.pvUnit.trim() && f.mvUnit.trim() ? { units: { pv: f.pvUnit.trim(), mv: f.mvUnit.trim() } } : {}),
     tags: list(f.tags),
     cautions: f.cautions.split('\n').map((x) => x.trim()).filter(Boolean),
     ...(f.model ? { model: f.model } : {}),
@@ -144,7 +151,7 @@ export default function RecipeEditor(props: RecipeEditorProps) {
     el.setSelectionRange(offset, offset);
   }
 
-  const text = (key: 'title' | 'summary' | 'area' | 'loopTags' | 'tags', label: string, hint?: string) => (
+  const text = (key: 'title' | 'summary' | 'loopTags' | 'tags' | 'pvUnit' | 'mvUnit', label: string, hint?: string) => (
     <label className="editor-field">
       <span>{label}</span>
       <input name={key} value={fields[key]} onChange={(e) => update({ [key]: e.target.value })} aria-invalid={error?.field === key} />
@@ -174,8 +181,16 @@ export default function RecipeEditor(props: RecipeEditorProps) {
               {props.loopTypes.map((t) => <option key={t} value={t}>{t}</option>)}
             </select>
           </label>
-          {text('area', 'Process area', 'e.g. htst, cip, boiler')}
+          <label className="editor-field">
+            <span>Process area</span>
+            <select name="area" value={fields.area} onChange={(e) => update({ area: e.target.value })} aria-invalid={error?.field === 'area'}>
+              <option value="">choose…</option>
+              {props.areas.map((a) => <option key={a.code} value={a.code}>{a.name}</option>)}
+            </select>
+          </label>
           {text('loopTags', 'Loop tags', 'ISA-5.1, comma-separated: TIC-210, TIC-211')}
+          {text('pvUnit', 'Measurement unit (PV)', 'e.g. °C, m³/h, % level')}
+          {text('mvUnit', 'Output unit (MV)', 'e.g. % valve, % speed')}
           {text('tags', 'Keywords', 'comma-separated')}
           <ModelFields value={fields.model} onChange={(model) => update({ model })} />
           <ControllerFields value={fields.controller} onChange={(controller) => update({ controller })} />

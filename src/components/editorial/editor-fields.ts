@@ -8,6 +8,7 @@ export interface RecipeForForm {
   body: string;
   area?: string | null;
   loopTags?: string[];
+  units?: { pv: string; mv: string } | null;
   tags?: string[];
   cautions?: string[];
   model?: unknown;
@@ -22,6 +23,8 @@ export function fieldsFromRecipe(r: RecipeForForm): EditorFields {
     loopType: r.loopType,
     area: r.area ?? '',
     loopTags: (r.loopTags ?? []).join(', '),
+    pvUnit: r.units?.pv ?? '',
+    mvUnit: r.units?.mv ?? '',
     tags: (r.tags ?? []).join(', '),
     cautions: (r.cautions ?? []).join('\n'),
     model: (r.model as EditorFields['model']) ?? null,

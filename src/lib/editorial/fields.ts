@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import { ClaimSchema, PidControllerSchema, ProcessModelSchema, TransferFunctionSchema } from '../schemas';
 import { BODY_LIMITS } from '../recipes/authored-mdx/limits';
+import { LoopTagSchema, LoopUnitsSchema } from '../recipes/schema';
+import { AREA_CODES, LOOP_TYPES } from '../recipes/vocabulary';
 
-/** What a loop controls (the file recipes' vocabulary). */
-export const LOOP_TYPES = ['flow', 'level', 'temperature', 'pressure', 'speed', 'position', 'ph', 'composition', 'other'] as const;
+export { LOOP_TYPES };
 
 /**
  * The fields of an authored recipe that its author writes (the workflow fields — status,
@@ -27,10 +28,12 @@ export const AuthoredFieldsSchema = z.object({
   claims: z.array(ClaimSchema).max(40).optional(),
   /** Measurement path H(s). */
   sensor: TransferFunctionSchema.optional(),
-  /** Process-area code, e.g. "htst". */
-  area: z.string().trim().max(40).optional(),
+  /** Process-area code of the plant, e.g. "htst" (the file recipes' codes). */
+  area: z.enum(AREA_CODES, { message: `area is one of ${AREA_CODES.join(', ')}.` }).optional(),
+  /** Units of the measurement (pv) and controller output (mv), e.g. °C and % valve. */
+  units: LoopUnitsSchema.optional(),
   /** ISA-5.1 tags of the loops it serves, e.g. ["TIC-210"]. */
-  loopTags: z.array(z.string().regex(/^[A-Z]{2,5}-\d{2,5}[A-Z]?$/, 'Write loop tags ISA-5.1 style, e.g. TIC-210.')).max(40).optional(),
+  loopTags: z.array(LoopTagSchema).max(40).optional(),
   /** Free keywords for search. */
   tags: z.array(z.string().trim().min(1).max(40)).max(40).optional(),
   /** Cautions particular to this loop, shown with the standard ones. */

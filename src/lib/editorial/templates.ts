@@ -4,7 +4,7 @@ import { listTemplateRows, upsertTemplateRow } from '../db/recipe-templates';
 import { atLeast, type Actor } from './actor';
 import { compileForSave } from './body';
 import type { EditorialContext } from './context';
-import { defaultTemplate } from './default-templates';
+import { defaultTemplate, STARTERS } from './default-templates';
 import { EditorialError, forbidden } from './errors';
 import { LOOP_TYPES, type TemplateSchema } from './fields';
 
@@ -23,7 +23,8 @@ export async function listTemplates(ctx: EditorialContext) {
   return LOOP_TYPES.map((loopType) => {
     const row = saved.get(loopType);
     const base = row ?? defaultTemplate(loopType);
-    return { loopType, title: base.title, body: base.body, updatedAt: row?.updated_at ?? null, updatedBy: row?.updated_by ?? null, builtIn: !row };
+    const starter = STARTERS[loopType];
+    return { loopType, title: base.title, body: base.body, units: starter.units, model: starter.model, controller: starter.controller, updatedAt: row?.updated_at ?? null, updatedBy: row?.updated_by ?? null, builtIn: !row };
   });
 }
 

@@ -7,6 +7,7 @@ import { afterCommit, type EditorialContext, type OutgoingMail } from './context
 import { EditorialError, forbidden } from './errors';
 import { loadForWrite, recipeLink, reload } from './load';
 import { mails } from './notify';
+import { reviewReadiness } from './readiness';
 import { TRANSITIONS, type Transition } from './status';
 import { frontmatterOf } from './view';
 import { loopOwnerNotices } from '../fielddata/service/retire';
@@ -35,6 +36,10 @@ export async function transitionRecipe(ctx: EditorialContext, actor: Actor, slug
     throw new EditorialError(409, 'invalid_transition', `"${slug}" is ${row.status.replace('_', ' ')}; only a recipe that is ${rule.from.replace('_', ' ')} can be ${rule.verb}.`);
   }
   if (kind === 'retire' && input.supersededBy) await checkSuccessor(ctx, slug, input.supersededBy);
+  if (kind === 'submit') {
+    const missing = reviewReadiness(row);
+    if (missing) throw missing;
+  }
 
   const now = ctx.now();
   const changes: Partial<AuthoredRecipeRow> = { status: rule.to, updated_at: now };

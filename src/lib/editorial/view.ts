@@ -33,6 +33,7 @@ export function toApiRecipe(row: AuthoredRecipeWithRevision, rating: RatingSumma
     sensor: fm.sensor ?? null,
     area: fm.area ?? null,
     loopTags: fm.loopTags ?? [],
+    units: fm.units ?? null,
     tags: fm.tags ?? [],
     cautions: fm.cautions ?? [],
     ownerEmail: row.owner_email,

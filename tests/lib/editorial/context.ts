@@ -34,5 +34,10 @@ export const DRAFT = {
   title: 'HTST hot-water temperature, PI',
   summary: 'Holds the hot-water set on the HTST heating section; PI from a bump test.',
   loopType: 'temperature' as const,
+  area: 'htst' as const,
+  loopTags: ['TIC-210'],
+  units: { pv: '°C', mv: '% valve' },
+  model: { type: 'fopdt' as const, k: 0.9, tau: 45, theta: 6 },
+  controller: { form: 'ideal' as const, kc: 1.4, ti: 45 },
   body: '## When to use it\n\nOn TIC-210.\n\n<LoopResponse model={{ type: "fopdt", k: 0.9, tau: 45, theta: 6 }} controller={{ form: "ideal", kc: 1.4, ti: 45 }} />\n',
 };

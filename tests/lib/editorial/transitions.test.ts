@@ -82,6 +82,12 @@ describe('transitionRecipe', () => {
     ]);
   });
 
+  it('sends a draft to review only with what every recipe page shows (model, controller, area, a loop tag)', async () => {
+    const bare = await createRecipe(t.ctx, PEOPLE.author, { title: DRAFT.title, summary: DRAFT.summary, loopType: 'temperature', body: DRAFT.body });
+    await expect(transitionRecipe(t.ctx, PEOPLE.author, bare.slug, 'submit')).rejects.toMatchObject({ status: 400, code: 'invalid_request', field: 'model' });
+    expect((await t.knex('recipes').where({ slug: bare.slug }).first()).status).toBe('draft');
+  });
+
   it('refuses a successor that does not exist or is the recipe itself', async () => {
     for (const step of PATH_TO.published) await transitionRecipe(t.ctx, PEOPLE[ACTOR[step]], slug, step);
     for (const supersededBy of ['no-such-recipe', slug]) {
