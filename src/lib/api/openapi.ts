@@ -2,6 +2,7 @@ import { createDocument, type ZodOpenApiPathsObject } from 'zod-openapi';
 import { APP_VERSION } from '../version';
 import { calcPaths } from './paths/calc';
 import { metaPaths } from './paths/meta';
+import { editorialPaths } from './paths/editorial';
 
 /**
  * The OpenAPI 3.1 document of /api/v1, generated from the same zod schemas that validate the
@@ -9,7 +10,7 @@ import { metaPaths } from './paths/meta';
  * here; tests/lib/api/openapi.test.ts fails for any route file under src/pages/api/v1 that is
  * missing.
  */
-export const pathGroups: readonly ZodOpenApiPathsObject[] = [calcPaths, metaPaths];
+export const pathGroups: readonly ZodOpenApiPathsObject[] = [calcPaths, metaPaths, editorialPaths];
 
 let cached: ReturnType<typeof createDocument> | null = null;
 
