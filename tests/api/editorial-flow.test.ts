@@ -55,14 +55,20 @@ describe('the editorial flow over HTTP', () => {
     const { body: created } = await as.author.call('POST', '/api/v1/recipes', sampleRecipe('Silo agitator speed'));
     await as.author.call('POST', `/api/v1/recipes/${created.slug}/submit`);
     const curator = demoAccount('curator').email;
+    const author = demoAccount('author').email;
     expect(capturedMail(server).some((m) => m.to.includes(curator) && m.subject === 'Review requested: Silo agitator speed')).toBe(true);
     const before = await as.reader.call('GET', '/api/v1/search?q=agitator');
     expect((before.body.hits as { slug: string }[]).some((h) => h.slug === created.slug)).toBe(false);
     expect((await as.curator.call('POST', `/api/v1/recipes/${created.slug}/publish`)).status).toBe(200);
     const after = await as.reader.call('GET', '/api/v1/search?q=agitator');
     expect((after.body.hits as { slug: string }[])[0]?.slug).toBe(created.slug);
-    const author = demoAccount('author').email;
     expect(capturedMail(server).some((m) => m.to.includes(author) && m.subject === 'Published: Silo agitator speed')).toBe(true);
+    const audit = await as.admin.call('GET', `/api/v1/audit-log?slug=${created.slug}`);
+    expect((audit.body.entries as { action: string; actorEmail: string }[]).map((e) => [e.action, e.actorEmail])).toEqual([
+      ['publish', curator],
+      ['submit', author],
+      ['create', author],
+    ]);
     const listed = await as.reader.call('GET', '/api/v1/recipes');
     expect((listed.body.recipes as { slug: string; source: string }[]).find((r) => r.slug === created.slug)).toMatchObject({ source: 'authored', status: 'published' });
   });
