@@ -1,6 +1,7 @@
 import './editorial.css';
 import { useEffect, useState } from 'react';
 import { callApi, type ApiError } from './api';
+import LoopsFollowing from '../fielddata/LoopsFollowing';
 
 export interface WorkflowActionsProps {
   slug: string;
@@ -56,6 +57,7 @@ export default function WorkflowActions({ slug, status, isOwner, isCurator }: Wo
             <textarea rows={3} value={reason} onChange={(e) => setReason(e.target.value)} required minLength={3} data-testid="retire-reason" /></label>
           <label className="editor-field"><span>Replaced by (slug of a published recipe, optional)</span>
             <input value={successor} onChange={(e) => setSuccessor(e.target.value)} placeholder="htst-product-temperature-cascade" data-testid="retire-successor" /></label>
+          <LoopsFollowing slug={slug} />
           <button type="submit" disabled={busy} data-testid="retire-confirm">Retire it</button> <button type="button" onClick={() => setOpen(null)}>Cancel</button>
         </form>
       )}

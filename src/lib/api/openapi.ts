@@ -3,6 +3,7 @@ import { APP_VERSION } from '../version';
 import { calcPaths } from './paths/calc';
 import { metaPaths } from './paths/meta';
 import { editorialPaths } from './paths/editorial';
+import { fieldDataPaths } from './paths/fielddata';
 
 /**
  * The OpenAPI 3.1 document of /api/v1, generated from the same zod schemas that validate the
@@ -10,7 +11,7 @@ import { editorialPaths } from './paths/editorial';
  * here; tests/lib/api/openapi.test.ts fails for any route file under src/pages/api/v1 that is
  * missing.
  */
-export const pathGroups: readonly ZodOpenApiPathsObject[] = [calcPaths, metaPaths, editorialPaths];
+export const pathGroups: readonly ZodOpenApiPathsObject[] = [calcPaths, metaPaths, editorialPaths, fieldDataPaths];
 
 let cached: ReturnType<typeof createDocument> | null = null;
 
