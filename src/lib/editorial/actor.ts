@@ -1,6 +1,7 @@
-/** Roles from lowest to highest (the auth module's order). */
-export const EDITORIAL_ROLES = ['reader', 'author', 'curator', 'admin'] as const;
-export type EditorialRole = (typeof EDITORIAL_ROLES)[number];
+import { hasRole, type Role } from '../auth/roles';
+
+/** A role in the editorial flow (the auth module's roles, lowest to highest). */
+export type EditorialRole = Role;
 
 /** The signed-in person acting on a recipe (the shape of `Astro.locals.user`). */
 export interface Actor {
@@ -10,7 +11,5 @@ export interface Actor {
   role: string;
 }
 
-/** True when `actor` holds `min` or a higher role. */
-export function atLeast(actor: Actor | null | undefined, min: EditorialRole): boolean {
-  return Boolean(actor) && EDITORIAL_ROLES.indexOf(actor!.role as EditorialRole) >= EDITORIAL_ROLES.indexOf(min);
-}
+/** True when `actor` holds `min` or a higher role (the auth module's rank check). */
+export const atLeast: (actor: Actor | null | undefined, min: EditorialRole) => boolean = hasRole;
