@@ -232,7 +232,7 @@ export default function RecipeEditor(props: RecipeEditorProps) {
                 <div><h4>Theirs (saved)</h4><pre data-testid="conflict-theirs">{conflict.theirs.body}</pre></div>
                 <div><h4>Yours (not saved)</h4><pre data-testid="conflict-mine">{conflict.mine.body}</pre></div>
               </div>
-              <button type="button" onClick={() => void save(conflict.theirs.revision, conflict.mine)} data-testid="keep-mine">Save mine on top of theirs</button>{' '}
+              <button type="button" onClick={() => void save(conflict.theirs.revision, fields)} data-testid="keep-mine">Save my text (as it is now in the editor) on top of theirs</button>{' '}
               <button type="button" onClick={() => { setFields(fieldsFromRecipe(conflict.theirs)); setRevision(conflict.theirs.revision); setConflict(null); setError(null); }}>Take theirs</button>
             </section>
           )}
