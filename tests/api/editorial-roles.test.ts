@@ -13,6 +13,9 @@ type Setup = 'draft' | 'in_review' | 'published' | 'none';
 const MATRIX: { route: string; method: string; path: (slug: string) => string; setup: Setup; body?: (slug: string) => unknown; expect: Record<Who, number> }[] = [
   { route: 'create', method: 'POST', path: () => '/api/v1/recipes', setup: 'none', body: () => sampleRecipe('Boiler feedwater level'), expect: { anonymous: 401, reader: 403, author: 201, curator: 201, admin: 201 } },
   { route: 'save own draft', method: 'PUT', path: (s) => `/api/v1/recipes/${s}`, setup: 'draft', body: () => ({ baseRevision: 1, summary: 'Tightened after the March step test on the caustic wash.' }), expect: { anonymous: 401, reader: 403, author: 200, curator: 200, admin: 200 } },
+  { route: 'list recipes', method: 'GET', path: () => '/api/v1/recipes', setup: 'none', expect: { anonymous: 401, reader: 200, author: 200, curator: 200, admin: 200 } },
+  { route: 'search', method: 'GET', path: () => '/api/v1/search?q=temperature', setup: 'none', expect: { anonymous: 401, reader: 200, author: 200, curator: 200, admin: 200 } },
+  { route: 'read a published recipe', method: 'GET', path: (s) => `/api/v1/recipes/${s}`, setup: 'published', expect: { anonymous: 401, reader: 200, author: 200, curator: 200, admin: 200 } },
   { route: 'read a draft', method: 'GET', path: (s) => `/api/v1/recipes/${s}`, setup: 'draft', expect: { anonymous: 401, reader: 404, author: 200, curator: 200, admin: 200 } },
   { route: 'submit', method: 'POST', path: (s) => `/api/v1/recipes/${s}/submit`, setup: 'draft', expect: { anonymous: 401, reader: 403, author: 200, curator: 403, admin: 403 } },
   { route: 'publish', method: 'POST', path: (s) => `/api/v1/recipes/${s}/publish`, setup: 'in_review', expect: { anonymous: 401, reader: 403, author: 403, curator: 200, admin: 200 } },
