@@ -1,14 +1,16 @@
 /**
  * Poles, zeros and stability. A loop without dead time is judged by the roots of its
  * characteristic polynomial; with dead time by the Nyquist criterion (Z = P − Δarg(1 + L)/2π along
- * the Nyquist contour, indented to the right of imaginary-axis poles), with the argument
- * tracked adaptively so that no encirclement is stepped over, however long the dead time.
+ * the Nyquist contour, indented to the right of imaginary-axis poles), the argument taken
+ * between the gain crossovers in closed form (winding.ts), so the cost does not grow with the
+ * dead time.
  */
 import type { Complex, TransferFunction } from './types';
 import { type FactoredModel, pointInto, timeScales } from './frequency';
 import { add, product } from './polynomial';
 import { roots } from './roots';
-import { loopScan, type LoopScan } from './scan-grid';
+import { loopScan } from './scan-grid';
+import { windingAlong } from './winding';
 import { cabs } from './roots';
 
 /** A root with its damping ratio ζ = −re/|p| and natural frequency ωn = |p| (rad/s). */
@@ -69,12 +71,12 @@ export function nyquistUnstableCount(m: FactoredModel): number {
   let delta = 0;
   let closest = Infinity;
   if (cuts.length === 0) {
-    const seg = trackArgument(m, eps, wEnd, loopScan(m));
+    const seg = windingAlong(m, eps, wEnd, loopScan(m));
     delta = seg.delta;
     closest = seg.closest;
   } else {
     for (let k = 0; k + 1 < bounds.length; k += 2) {
-      const seg = trackArgument(m, bounds[k], bounds[k + 1], null);
+      const seg = windingAlong(m, bounds[k], bounds[k + 1], null);
       delta += seg.delta;
       closest = Math.min(closest, seg.closest);
     }
@@ -107,51 +109,6 @@ function endFrequency(m: FactoredModel, scales: number[]): number {
   };
   for (let i = 0; i < 200 && bound(w) >= limit; i++) w *= 2;
   return w;
-}
-
-/**
- * Continuous change of arg(1 + L(jw)) from a to b, refined until each step turns less than 30°.
- * Starts from the shared scan values where they lie inside [a, b].
- */
-function trackArgument(m: FactoredModel, a: number, b: number, scan: LoopScan | null): { delta: number; closest: number } {
-  const decades = Math.log10(b / a);
-  const n = Math.max(2, Math.ceil(decades * 10));
-  let prevW = a;
-  let prev = onePlusL(m, a);
-  let delta = 0;
-  let closest = cabs(prev.re, prev.im);
-  const maxTurn = Math.PI / 6;
-  const stepTo = (w1: number, depth: number, known?: Complex): void => {
-    const next = known ?? onePlusL(m, w1);
-    let turn = Math.atan2(prev.re * next.im - prev.im * next.re, prev.re * next.re + prev.im * next.im);
-    // The dead time alone turns L by w·θ: never step further than a fraction of a turn of it —
-    // unless |L| is small at both ends: then 1 + L stays near 1 and cannot circle the origin.
-    const small = Math.abs(prev.re - 1) + Math.abs(prev.im) < 0.6 && Math.abs(next.re - 1) + Math.abs(next.im) < 0.6;
-    const delayTurn = small ? 0 : (w1 - prevW) * m.delay;
-    if ((Math.abs(turn) > maxTurn || delayTurn > maxTurn) && depth < 40) {
-      const mid = Math.sqrt(prevW * w1);
-      stepTo(mid, depth + 1);
-      stepTo(w1, depth + 1);
-      return;
-    }
-    delta += turn;
-    closest = Math.min(closest, Math.sqrt(next.re * next.re + next.im * next.im));
-    prev = next;
-    prevW = w1;
-  };
-  if (scan) {
-    for (let i = 0; i < scan.w.length; i++) {
-      const w = scan.w[i];
-      if (w <= a || w >= b) continue;
-      const ph = (scan.phaseDeg[i] * Math.PI) / 180;
-      stepTo(w, 0, { re: 1 + scan.mag[i] * Math.cos(ph), im: scan.mag[i] * Math.sin(ph) });
-    }
-    for (let w = prevW * 1.26; w < b; w *= 1.26) stepTo(w, 0);
-    stepTo(b, 0);
-    return { delta, closest };
-  }
-  for (let i = 1; i < n; i++) stepTo(a * (b / a) ** (i / (n - 1)), 0);
-  return { delta, closest };
 }
 
 /** Open-path stability: every pole strictly in the left half plane (dead time does not matter). */

@@ -1,0 +1,99 @@
+/**
+ * Change of arg(1 + L(jw)) along a stretch [a, b] of the imaginary axis, L with exact dead time,
+ * at a cost that does not grow with the dead time. The delay turns L by −w·θ, possibly millions
+ * of turns, but only whether |L| is above or below 1 decides how those turns wind 1 + L:
+ * - where |L| < 1 throughout, 1 + L stays in the right half plane, so its argument is the
+ *   principal one at each end;
+ * - where |L| > 1 throughout, 1 + L = L·(1 + 1/L) with 1 + 1/L in the right half plane, so the
+ *   change is that of the continuous phase of L (exact, delay included) plus the principal
+ *   argument of 1 + 1/L at each end.
+ * So [a, b] is cut where |L| = |L_R| crosses 1 (Brent on log|L|), and between cuts the ends
+ * suffice. |L| is smooth on the time scales of the rational part only; the grid is the shared
+ * scan (every root frequency, 16 points per decade) and is refined where the phase of the
+ * rational part turns more than 30° between points.
+ */
+import { type FactoredModel, pointInto } from './frequency';
+import { bisectLog, type LoopScan } from './scan-grid';
+import { MAX_TURN_REFINEMENTS, ModelBudget } from './budget';
+
+interface Sample {
+  w: number;
+  mag: number;
+  /** Continuous phase of L, rad, dead time included. */
+  phi: number;
+}
+
+const MAX_RATIONAL_TURN = Math.PI / 6;
+const PER_DECADE = 16;
+
+/** arg(1 + L) on the branch that is continuous while |L| stays on the given side of 1. */
+function branchArg(s: Sample, outside: boolean): number {
+  const c = Math.cos(s.phi), si = Math.sin(s.phi);
+  if (outside) {
+    // 1 + 1/L = 1 + e^(−jφ)/|L|
+    return s.phi + Math.atan2(-si / s.mag, 1 + c / s.mag);
+  }
+  return Math.atan2(s.mag * si, 1 + s.mag * c);
+}
+
+function distance(s: Sample): number {
+  const re = 1 + s.mag * Math.cos(s.phi), im = s.mag * Math.sin(s.phi);
+  return Math.sqrt(re * re + im * im);
+}
+
+export interface Winding {
+  /** Change of arg(1 + L) from a to b, rad. */
+  delta: number;
+  /** Least |1 + L| met (at the evaluated points and gain crossovers). */
+  closest: number;
+}
+
+export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopScan | null): Winding {
+  const budget = new ModelBudget(MAX_TURN_REFINEMENTS, 'The stability test would need too many frequency evaluations for this loop; check the model for extreme coefficients.', 'controller');
+  const point = { mag: 0, phaseDeg: 0 };
+  let closest = Infinity;
+  const sample = (w: number): Sample => {
+    budget.spend(1);
+    pointInto(m, w, point);
+    const s = { w, mag: point.mag, phi: (point.phaseDeg * Math.PI) / 180 };
+    closest = Math.min(closest, distance(s));
+    return s;
+  };
+  const logMagAt = (w: number) => {
+    budget.spend(1);
+    pointInto(m, w, point);
+    return Math.log(point.mag);
+  };
+  const turn = (p: Sample, q: Sample, depth: number): number => {
+    const rational = q.phi + q.w * m.delay - (p.phi + p.w * m.delay);
+    if (Math.abs(rational) > MAX_RATIONAL_TURN && depth < 40) {
+      const mid = sample(Math.sqrt(p.w * q.w));
+      return turn(p, mid, depth + 1) + turn(mid, q, depth + 1);
+    }
+    const pOut = p.mag > 1, qOut = q.mag > 1;
+    if (pOut === qOut) return branchArg(q, pOut) - branchArg(p, pOut);
+    const c = sample(bisectLog(logMagAt, p.w, q.w, Math.log(p.mag)));
+    return branchArg(c, pOut) - branchArg(p, pOut) + branchArg(q, qOut) - branchArg(c, qOut);
+  };
+  const grid = gridBetween(a, b, scan);
+  let prev = sample(grid[0]);
+  let delta = 0;
+  for (let i = 1; i < grid.length; i++) {
+    const next = sample(grid[i]);
+    delta += turn(prev, next, 0);
+    prev = next;
+  }
+  return { delta, closest };
+}
+
+/** a, the scan's points inside (a, b), a logarithmic fill where the scan does not reach, b. */
+function gridBetween(a: number, b: number, scan: LoopScan | null): number[] {
+  const inside = scan ? scan.w.filter((w) => w > a && w < b) : [];
+  const fill = (from: number, to: number): number[] => {
+    if (!(to > from)) return [];
+    const n = Math.ceil(Math.log10(to / from) * PER_DECADE);
+    return Array.from({ length: Math.max(0, n - 1) }, (_, i) => from * (to / from) ** ((i + 1) / n));
+  };
+  if (inside.length === 0) return [a, ...fill(a, b), b];
+  return [a, ...fill(a, inside[0]), ...inside, ...fill(inside[inside.length - 1], b), b];
+}
