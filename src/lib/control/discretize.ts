@@ -30,9 +30,22 @@ export interface DiscreteTransferFunction {
   delaySamples: number;
 }
 
-/** The dead time as whole samples, or ModelError when it is not one within 1e-9 (relative). */
+/** Most whole samples of dead time a discrete model may carry (a PLC's delay buffer, at most). */
+export const MAX_DELAY_SAMPLES = 1_000_000;
+
+/**
+ * The dead time as whole samples, or ModelError when it is not one within 1e-9 (relative) or
+ * is more than MAX_DELAY_SAMPLES samples (also when delay/ts overflows).
+ */
 export function delayInSamples(delay: number, ts: number): number {
   const ratio = delay / ts;
+  if (!(ratio <= MAX_DELAY_SAMPLES)) {
+    throw new ModelError(
+      `The dead time is more than ${MAX_DELAY_SAMPLES.toLocaleString('en-US')} samples of ts; choose a longer sample time.`,
+      'invalid_request',
+      'tf.delay',
+    );
+  }
   const samples = Math.round(ratio);
   if (Math.abs(ratio - samples) > 1e-9 * Math.max(1, ratio)) {
     throw new ModelError(
@@ -49,7 +62,7 @@ function normalize(num: number[], den: number[], delaySamples: number): Discrete
   const lead = den[0];
   if (![...num, ...den].every(Number.isFinite) || lead === 0) {
     throw new ModelError(
-      'The discrete coefficients overflow: an unstable pole grows too much over one sample; shorten ts.',
+      'The discrete coefficients overflow: ts is too long for this model (or an unstable pole grows too much over one sample); shorten ts.',
       'invalid_request',
       'ts',
     );

@@ -7,7 +7,7 @@
  * overflow — and the root angles pick the 360° branch of the phase, so roots of repeated poles,
  * which are only accurate to eps^(1/m), cannot spoil magnitude or phase.
  */
-import type { Complex, TransferFunction } from './types';
+import { ModelError, type Complex, type TransferFunction } from './types';
 import { roots } from './roots';
 import { cabs } from './roots';
 
@@ -37,10 +37,42 @@ export function factor(blocks: readonly TransferFunction[]): FactoredModel {
   for (const b of blocks) {
     gain *= b.num[0] / b.den[0];
     delay += b.delay;
-    zeros.push(...roots(b.num));
-    poles.push(...roots(b.den));
+    const z = roots(b.num), p = roots(b.den);
+    checkRootSpan([...z, ...p]);
+    zeros.push(...z);
+    poles.push(...p);
+  }
+  if (![...zeros, ...poles].every((r) => Number.isFinite(r.re) && Number.isFinite(r.im)) || !Number.isFinite(gain)) {
+    throw new ModelError(
+      'A pole, zero or gain of the loop lies beyond the range of numbers; the coefficients span too many decades (look for values such as 1e300).',
+      'invalid_request',
+    );
   }
   return fromFactors(gain, zeros, poles, delay, blocks.map((b) => ({ num: b.num, den: b.den })));
+}
+
+/** Most decades between the slowest and fastest non-zero root of one block. */
+const MAX_ROOT_DECADES = 100;
+
+/**
+ * A block whose time constants lie more than MAX_ROOT_DECADES apart (e.g. ti = 1e300 s beside a
+ * derivative filter of 0.08 s) cannot be evaluated in double precision: its coefficients span
+ * the whole range of numbers, so roots and closed-loop verdicts would be noise. Refused.
+ */
+function checkRootSpan(list: readonly Complex[]): void {
+  let lo = Infinity, hi = 0;
+  for (const r of list) {
+    const a = cabs(r.re, r.im);
+    if (a === 0) continue;
+    lo = Math.min(lo, a);
+    hi = Math.max(hi, a);
+  }
+  if (hi > 0 && !(hi / lo <= 10 ** MAX_ROOT_DECADES)) {
+    throw new ModelError(
+      `A block of the loop has time constants more than ${MAX_ROOT_DECADES} decades apart (look for values such as 1e300 s); numbers that far apart cannot be combined accurately.`,
+      'invalid_request',
+    );
+  }
 }
 
 export function fromFactors(gain: number, zeros: Complex[], poles: Complex[], delay: number, blocks: { num: number[]; den: number[] }[] = []): FactoredModel {

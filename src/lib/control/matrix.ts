@@ -65,11 +65,14 @@ function infNorm(a: Float64Array, n: number): number {
 }
 
 /**
- * e^A for an n×n matrix A. The squaring phase works on X = e^(A/2^s) − I (X ← 2X + X²), which
+ * e^A for an n×n matrix A (all NaN when A's norm is not finite). The squaring phase works on X = e^(A/2^s) − I (X ← 2X + X²), which
  * keeps slow modes of stiff models accurate where squaring e^(A/2^s) itself would lose digits.
  */
 export function expm(a: Float64Array, n: number): Float64Array {
   const norm = infNorm(a, n);
+  // Entries beyond the range of numbers: the exponential is not representable (and the number
+  // of squarings would be unbounded); the caller sees NaN and reports it.
+  if (!Number.isFinite(norm)) return new Float64Array(n * n).fill(NaN);
   const s = norm > 0.5 ? Math.max(0, Math.ceil(Math.log2(norm / 0.5))) : 0;
   const f = 2 ** -s;
   const x = a.map((v) => v * f);

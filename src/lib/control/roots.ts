@@ -33,17 +33,18 @@ export function sortRoots(list: Complex[]): Complex[] {
 
 function lowOrderRoots(c: number[]): Complex[] {
   if (c.length === 2) return [{ re: -c[1] / c[0], im: 0 }];
-  const [a, b, k] = c;
-  const disc = b * b - 4 * a * k;
+  // Monic and scaled so that b² and 4k cannot overflow, whatever the coefficients' range.
+  const b = c[1] / c[0], k = c[2] / c[0];
+  const scale = Math.max(Math.abs(b), Math.sqrt(Math.abs(k)));
+  const bs = b / scale;
+  const disc = bs * bs - (4 * (k / scale)) / scale;
   if (disc >= 0) {
     // Stable form: avoid cancellation between −b and √disc.
-    const q = -0.5 * (b + Math.sign(b || 1) * Math.sqrt(disc));
-    const r1 = q / a;
-    const r2 = q !== 0 ? k / q : 0;
-    return [{ re: r1, im: 0 }, { re: r2, im: 0 }];
+    const q = -0.5 * (b + Math.sign(b || 1) * scale * Math.sqrt(disc));
+    return [{ re: q, im: 0 }, { re: q !== 0 ? k / q : 0, im: 0 }];
   }
-  const re = -b / (2 * a);
-  const im = Math.sqrt(-disc) / (2 * Math.abs(a));
+  const re = -b / 2;
+  const im = (scale * Math.sqrt(-disc)) / 2;
   return [{ re, im }, { re, im: -im }];
 }
 

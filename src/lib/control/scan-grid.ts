@@ -7,6 +7,10 @@
 import type { FactoredModel } from './frequency';
 import { magnitudeAt, pointInto, timeScales } from './frequency';
 import { cabs } from './roots';
+import { boundedCount } from './budget';
+
+/** Most points of the scan grid: 16 per decade over the whole double range is about 10 000. */
+const MAX_SCAN_POINTS = 20_000;
 
 const PER_DECADE = 16;
 
@@ -19,7 +23,7 @@ export function scanGrid(m: FactoredModel): number[] {
     for (let i = 0; i < 12 && magnitudeAt(m, hi) > 0.1; i++) hi *= 10;
   }
   const a = Math.log10(lo), b = Math.log10(hi);
-  const n = Math.ceil((b - a) * PER_DECADE) + 1;
+  const n = boundedCount(Math.ceil((b - a) * PER_DECADE) + 1, MAX_SCAN_POINTS, 'The loop\'s time scales span too many decades to scan; check the model for extreme coefficients.', 'plant');
   const w: number[] = [];
   for (let i = 0; i < n; i++) w.push(10 ** (a + ((b - a) * i) / (n - 1)));
   for (const r of [...m.poles, ...m.zeros]) {

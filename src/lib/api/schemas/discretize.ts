@@ -1,10 +1,9 @@
 import { z } from 'zod';
-import { DiscretizeRequestSchema as EngineDiscretizeRequestSchema } from '../../control/discretize';
+import { DiscretizeRequestSchema as EngineDiscretizeRequestSchema, MAX_DELAY_SAMPLES } from '../../control/discretize';
 import { reasonableMagnitude } from './magnitude';
 import { ProperTransferFunctionSchema } from './transfer-function';
 
-/** Most whole samples of dead time a discrete model may carry (a PLC's delay buffer, at most). */
-export const MAX_DELAY_SAMPLES = 1_000_000;
+export { MAX_DELAY_SAMPLES };
 
 /**
  * The body of POST /api/v1/calc/discretize: the engine's schema with the model checks of the
