@@ -19,6 +19,8 @@ import { MAX_TURN_REFINEMENTS, ModelBudget } from './budget';
 interface Sample {
   w: number;
   mag: number;
+  /** Continuous phase of the rational part L_R, rad. */
+  rational: number;
   /** Continuous phase of L, rad, dead time included. */
   phi: number;
 }
@@ -51,22 +53,25 @@ export interface Winding {
 export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopScan | null): Winding {
   const budget = new ModelBudget(MAX_TURN_REFINEMENTS, 'The stability test would need too many frequency evaluations for this loop; check the model for extreme coefficients.', 'controller');
   const point = { mag: 0, phaseDeg: 0 };
+  // The rational part's phase is taken without the delay: subtracting w·θ back out of the
+  // total phase would cancel all digits when w·θ is large.
+  const rationalPart: FactoredModel = { ...m, delay: 0 };
   let closest = Infinity;
   const sample = (w: number): Sample => {
     budget.spend(1);
-    pointInto(m, w, point);
-    const s = { w, mag: point.mag, phi: (point.phaseDeg * Math.PI) / 180 };
+    pointInto(rationalPart, w, point);
+    const rational = (point.phaseDeg * Math.PI) / 180;
+    const s = { w, mag: point.mag, rational, phi: rational - w * m.delay };
     closest = Math.min(closest, distance(s));
     return s;
   };
   const logMagAt = (w: number) => {
     budget.spend(1);
-    pointInto(m, w, point);
+    pointInto(rationalPart, w, point);
     return Math.log(point.mag);
   };
   const turn = (p: Sample, q: Sample, depth: number): number => {
-    const rational = q.phi + q.w * m.delay - (p.phi + p.w * m.delay);
-    if (Math.abs(rational) > MAX_RATIONAL_TURN && depth < 40) {
+    if (Math.abs(q.rational - p.rational) > MAX_RATIONAL_TURN && depth < 40) {
       const mid = sample(Math.sqrt(p.w * q.w));
       return turn(p, mid, depth + 1) + turn(mid, q, depth + 1);
     }
