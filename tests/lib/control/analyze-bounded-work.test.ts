@@ -23,6 +23,7 @@ describe('analyze', () => {
     { why: 'a 10 µs sensor lag', loop: { plant: lag10, sensor: { num: [1], den: [1e-5, 1], delay: 0 }, controller: pid }, reference: { plant: lag10, controller: pid } },
     { why: 'a 1 µs sensor lag', loop: { plant: lag10, sensor: { num: [1], den: [1e-6, 1], delay: 0 }, controller: pid }, reference: { plant: lag10, controller: pid } },
     { why: 'td = 1 µs (the derivative adds an impulse of area kc·td ≈ 2e-6)', loop: { plant: lag10, controller: { ...pid, td: 1e-6 } }, reference: { plant: lag10, controller: { ...pid, td: 0 } } },
+    { why: 'a 1 µs lag in the third block of a series', loop: { plant: [lag10, { num: [1], den: [1, 1], delay: 0 }, { num: [1], den: [1e-6, 1], delay: 0 }], controller: pid }, reference: { plant: [lag10, { num: [1], den: [1, 1], delay: 0 }], controller: pid } },
     { why: 'a 1 µs sensor lag without dead time (stiff pole and derivative filter)', loop: { plant: { ...lag10, delay: 0 }, sensor: { num: [1], den: [1e-6, 1], delay: 0 }, controller: pid }, reference: { plant: { ...lag10, delay: 0 }, controller: pid } },
   ];
   // Reference: the same loop with the negligible part dropped; a lag τ changes the response by
@@ -38,6 +39,8 @@ describe('analyze', () => {
 
   const violent = [
     { why: 'plant 1/(s+1) with a dead time of 1e6 s', loop: { plant: { num: [1], den: [1, 1], delay: 1e6 }, controller: pid } },
+    { why: 'process gain 1e11 with 2 s of dead time', loop: { plant: { num: [1], den: [1e-11], delay: 2 }, controller: pid } },
+    { why: 'sensor gain −1.5e52 (positive feedback)', loop: { plant: lag10, sensor: { num: [-1.5e52], den: [0.5, 1], delay: 0 }, controller: pid } },
     { why: 'plant gain 1000, dead time 2 s, sensor 1/(0.5s+1)', loop: { plant: { num: [1], den: [1e-3], delay: 2 }, sensor: { num: [1], den: [0.5, 1], delay: 0 }, controller: pid } },
   ];
   it.each(violent)('answers the full analysis of $why as unstable with finite numbers', ({ loop }) => {

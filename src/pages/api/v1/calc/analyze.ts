@@ -1,6 +1,5 @@
 import { calcRoute, modelRoots } from '../../../../lib/api/calc-route';
 import { AnalyzeRequestSchema } from '../../../../lib/api/schemas/analyze';
-import { checkLoopBudget } from '../../../../lib/api/loop-budget';
 import { analyze } from '../../../../lib/control/analyze';
 
 /**
@@ -11,8 +10,5 @@ export const { POST, ALL } = calcRoute({
   name: 'analyze',
   schema: AnalyzeRequestSchema,
   codeFor: modelRoots('plant', 'sensor'),
-  run: (request) => {
-    checkLoopBudget(request);
-    return analyze(request);
-  },
+  run: (request) => analyze(request),
 });
