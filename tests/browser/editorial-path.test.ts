@@ -100,8 +100,8 @@ describe('the editorial path in the browser', () => {
     await page.locator('[data-testid=rating-panel][data-ready=true]').waitFor();
     await page.getByTestId('star-4').click();
     await page.getByTestId('note-input').fill('Used on TIC-611 as well; ti 20 % longer because the valve sticks.');
-    await page.getByTestId('rate').click();
-    await expect.poll(() => page.getByTestId('rating-summary').textContent()).toBe('4.0 of 5 from 1 person');
+    await Promise.all([page.waitForEvent('load'), page.getByTestId('rate').click()]);
+    await expect.poll(async () => (await page.getByTestId('rating-summary').textContent())?.trim()).toBe('4.0 of 5 from 1 person');
     await expect.poll(() => page.getByTestId('field-notes').textContent()).toContain('valve sticks');
     expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
     await page.close();

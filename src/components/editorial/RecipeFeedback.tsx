@@ -1,79 +1,65 @@
 import './editorial.css';
 import { useEffect, useState } from 'react';
-import { callApi } from './api';
 
-interface Rating { average: number | null; count: number }
-interface Note { name: string; stars: number; note: string; updatedAt: string }
-interface Notes { rating: Rating; mine: { stars: number; note: string | null } | null; notes: Note[] }
-interface Watch { watching: boolean; watchers: number }
+export interface RecipeFeedbackProps {
+  slug: string;
+  /** Ratings are given to published and retired recipes. */
+  rateable: boolean;
+  /** The signed-in person's own rating, if any. */
+  mine: { stars: number; note: string | null } | null;
+  watching: boolean;
+  watchers: number;
+}
 
 /**
- * What a reader gives back on a recipe page, in one island (pages carry a JavaScript budget):
- * watching (mail on new published revisions, retirement and field notes) and, on published or
- * retired recipes, 1–5 stars with a field note, the average, the count and everyone's notes.
+ * What a reader gives back on a recipe page, kept small (pages carry a JavaScript budget): the
+ * watch toggle, and 1–5 stars with a field note. The average, count and notes are rendered by
+ * the server (RecipeEditorial.astro); after a rating the page reloads to show them.
  */
-export default function RecipeFeedback({ slug, rateable, initialRating }: { slug: string; rateable: boolean; initialRating: Rating }) {
+export default function RecipeFeedback({ slug, rateable, mine, watching: initiallyWatching, watchers: initialWatchers }: RecipeFeedbackProps) {
   const api = `/api/v1/recipes/${slug}`;
   const [ready, setReady] = useState(false);
-  const [watch, setWatch] = useState<Watch | null>(null);
-  const [rating, setRating] = useState(initialRating);
-  const [notes, setNotes] = useState<Note[]>([]);
-  const [stars, setStars] = useState(0);
-  const [note, setNote] = useState('');
+  const [watch, setWatch] = useState({ watching: initiallyWatching, watchers: initialWatchers });
+  const [stars, setStars] = useState(mine?.stars ?? 0);
+  const [note, setNote] = useState(mine?.note ?? '');
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState('');
-  const [saved, setSaved] = useState(false);
+  useEffect(() => setReady(true), []);
 
-  async function load() {
-    const r = await callApi<Notes>('GET', `${api}/notes`);
-    if (!r.ok) return;
-    setRating(r.data.rating);
-    setNotes(r.data.notes);
-    if (r.data.mine) {
-      setStars(r.data.mine.stars);
-      setNote((n) => n || r.data.mine!.note || '');
-    }
-  }
-  useEffect(() => {
-    setReady(true);
-    void callApi<Watch>('GET', `${api}/watch`).then((r) => (r.ok ? setWatch(r.data) : setError(r.error.message)));
-    if (rateable) void load();
-  }, [slug]);
-
-  async function send(method: 'PUT' | 'DELETE', path: string, body?: unknown) {
+  async function call(method: 'PUT' | 'DELETE', path: string, body?: unknown) {
     setBusy(true);
     setError('');
-    setSaved(false);
-    const r = await callApi<Watch & { rating: Rating }>(method, path, body);
+    // A plain fetch rather than api.ts: on every recipe page, one chunk fewer counts against the budget.
+    let answer: { watching: boolean; watchers: number; error?: { message: string } } | null = null;
+    let ok = false;
+    try {
+      const res = await fetch(path, { method, headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body ?? {}) });
+      ok = res.ok;
+      answer = await res.json();
+    } catch {
+      answer = null;
+    }
     setBusy(false);
-    if (!r.ok) setError(r.error.message);
-    return r.ok ? r.data : null;
+    if (!ok) setError(answer?.error?.message ?? 'The server could not be reached; try again.');
+    return ok ? answer : null;
   }
 
   async function rate() {
     if (stars < 1) return setError('Choose 1 to 5 stars first.');
-    const d = await send('PUT', `${api}/rating`, { stars, ...(note.trim() ? { note } : {}) });
-    if (!d) return;
-    setRating(d.rating);
-    setSaved(true);
-    await load();
+    if (await call('PUT', `${api}/rating`, { stars, ...(note.trim() ? { note } : {}) })) window.location.reload();
   }
 
   return (
-    <section className="rating-panel no-print" aria-labelledby="feedback-heading" data-testid="rating-panel" data-ready={ready ? 'true' : undefined}>
+    <div className="rating-panel" data-testid="rating-panel" data-ready={ready ? 'true' : undefined}>
       <p>
-        <button type="button" disabled={!watch || busy} aria-pressed={watch?.watching ?? false} data-testid="watch"
-          onClick={async () => { const d = watch && (await send(watch.watching ? 'DELETE' : 'PUT', `${api}/watch`)); if (d) setWatch(d); }}>
-          {watch?.watching ? 'Watching — stop' : 'Watch this recipe'}
+        <button type="button" disabled={busy} aria-pressed={watch.watching} data-testid="watch"
+          onClick={async () => { const d = await call(watch.watching ? 'DELETE' : 'PUT', `${api}/watch`); if (d) setWatch(d); }}>
+          {watch.watching ? 'Watching — stop' : 'Watch this recipe'}
         </button>
-        {watch && <span className="text-sm text-muted"> {watch.watchers} watching</span>}
+        <span className="text-sm text-muted"> {watch.watchers} watching</span>
       </p>
       {rateable && (
         <>
-          <h2 id="feedback-heading">Ratings and field notes</h2>
-          <p data-testid="rating-summary">
-            {rating.count ? `${rating.average?.toFixed(1)} of 5 from ${rating.count} ${rating.count === 1 ? 'person' : 'people'}` : 'Nobody has rated it yet.'}
-          </p>
           <div role="radiogroup" aria-label="Your rating">
             {[1, 2, 3, 4, 5].map((n) => (
               <button key={n} type="button" role="radio" aria-checked={stars === n} aria-label={`${n} of 5`} className={n <= stars ? 'star on' : 'star'} onClick={() => setStars(n)} data-testid={`star-${n}`}>★</button>
@@ -83,16 +69,10 @@ export default function RecipeFeedback({ slug, rateable, initialRating }: { slug
             <span>Field note (optional): what happened when you used it</span>
             <textarea rows={3} value={note} maxLength={2000} onChange={(e) => setNote(e.target.value)} placeholder="Used on TIC-214; needed ti 20 % longer because the valve sticks." data-testid="note-input" />
           </label>
-          <button type="button" onClick={() => void rate()} disabled={busy} data-testid="rate">{busy ? 'Saving…' : 'Save my rating'}</button>
-          {saved && <span className="editor-notice" data-testid="rating-saved"> Thank you — saved.</span>}
-          {notes.length > 0 && (
-            <ul className="field-notes" data-testid="field-notes">
-              {notes.map((n, i) => <li key={i}><strong>{n.name}</strong> · {n.stars}/5 · {n.updatedAt.slice(0, 10)}<p>{n.note}</p></li>)}
-            </ul>
-          )}
+          <button type="button" onClick={() => void rate()} disabled={busy} data-testid="rate">{busy ? 'Saving…' : mine ? 'Change my rating' : 'Save my rating'}</button>
         </>
       )}
       {error && <p className="editor-error" role="alert">{error}</p>}
-    </section>
+    </div>
   );
 }
