@@ -83,10 +83,15 @@ export async function run(): Promise<void> {
     return `${k} p50 ${percentile(t, 50).toFixed(2)} / p95 ${percentile(t, 95).toFixed(2)} ms`;
   });
   const broadTimes = time(broad);
+  // Two typos in a long word (two middle letters swapped): the slowest path, one walk of the
+  // term tree within one edit and one within two.
+  const twoTypos = WORDS.filter((w) => w.length > 8).map((w) => w.slice(0, 3) + w[4] + w[3] + w.slice(5));
+  const twoTypoTimes = time(twoTypos);
 
   console.log(`recipes indexed: ${index.size}`);
   console.log(`index build: ${buildMs.toFixed(0)} ms`);
   console.log(`query p50: ${percentile(times, 50).toFixed(2)} ms, p95: ${percentile(times, 95).toFixed(2)} ms (target p95 < 5 ms) over ${times.length} queries`);
   console.log(`  by kind: ${byKind.join('; ')}`);
   console.log(`broad queries (a word in most recipes): p50 ${percentile(broadTimes, 50).toFixed(1)} ms, p95 ${percentile(broadTimes, 95).toFixed(1)} ms`);
+  console.log(`two typos in a long word (${twoTypos.length} words): p50 ${percentile(twoTypoTimes, 50).toFixed(2)} ms, p95 ${percentile(twoTypoTimes, 95).toFixed(2)} ms`);
 }

@@ -1,8 +1,11 @@
-import MiniSearch from 'minisearch';
+import MiniSearch, { type SearchResult } from 'minisearch';
 import type { RecipeRecord } from '../record';
 import type { RecipeStatus } from '../vocabulary';
-import { excerpt, highlight, type TextSegment } from './highlight';
+import { termMatcher, type TermMatcher, type TextSegment } from './highlight';
+import { BOOST, maxEdits, prefixing, queryTerms, tokenize } from './matching';
 import { plainText } from './plain-text';
+
+export { tokenize } from './matching';
 
 /** What the index holds per recipe. */
 interface SearchDocument {
@@ -37,40 +40,6 @@ export interface SearchOptions {
 /** Statuses the index holds: readers search published recipes, and retired ones on request. */
 const SEARCHABLE = new Set<RecipeStatus>(['published', 'retired']);
 
-/** Field boosts: a word in the title or a loop tag says more than one in the body. */
-const BOOST = { title: 4, loopTags: 3, tags: 2, summary: 1.5, body: 1 };
-
-/**
- * Typos forgiven: one edit in words of five to eight letters, two in longer ones; shorter words
- * and loop tags must match (a wider net costs time on a large index and finds noise).
- */
-function fuzziness(term: string): number | false {
-  if (term.length < 5 || /\d/.test(term)) return false;
-  return term.length <= 8 ? 1 : 2;
-}
-
-/** The start of a word is enough from three letters on. */
-function prefixing(term: string): boolean {
-  return term.length >= 3;
-}
-
-/** An ISA-5.1 loop tag such as TIC-210 or FIC-101A: kept as one word. */
-const LOOP_TAG = /^[a-z]{2,5}-?\d{2,5}[a-z]?$/i;
-const SPACE_OR_PUNCTUATION = /[\n\r\p{Z}\p{P}]+/u;
-
-/**
- * Words as MiniSearch's default splits them, except loop tags, which stay whole in documents and
- * queries alike ("TIC-210" is one word, also found as "tic210"), so "TIC" never finds "FIC-101"
- * and a tag query does not match every recipe that mentions any TIC.
- */
-export function tokenize(text: string): string[] {
-  return text.split(/\s+/).flatMap((chunk) => {
-    const bare = chunk.replace(/^[^\p{L}\p{N}]+|[^\p{L}\p{N}]+$/gu, '');
-    if (LOOP_TAG.test(bare)) return bare.includes('-') ? [bare, bare.replace('-', '')] : [bare];
-    return chunk.split(SPACE_OR_PUNCTUATION).filter(Boolean);
-  });
-}
-
 function toDocument(r: RecipeRecord): SearchDocument {
   const d = r.data;
   return {
@@ -89,11 +58,12 @@ function toDocument(r: RecipeRecord): SearchDocument {
 export function createSearchIndex(records: RecipeRecord[] = []) {
   const mini = new MiniSearch<SearchDocument>({
     fields: ['title', 'summary', 'tags', 'loopTags', 'body'],
-    // Only what the filter needs is stored in the index: MiniSearch copies stored fields into
-    // every hit, and a broad query can hit every recipe. Texts for excerpts are kept beside it.
+    // Only what the published-only document boost needs is stored in the index: MiniSearch copies
+    // stored fields into every hit, and a broad query can hit every recipe. Texts for excerpts
+    // are kept beside it.
     storeFields: ['status'],
     tokenize,
-    searchOptions: { boost: BOOST, prefix: prefixing, fuzzy: fuzziness, maxFuzzy: 2 },
+    searchOptions: { boost: BOOST, prefix: prefixing, fuzzy: false, maxFuzzy: 2 },
   });
 
   /** Puts a recipe in the index, replacing its older version; drafts and recipes in review leave it. */
@@ -113,13 +83,31 @@ export function createSearchIndex(records: RecipeRecord[] = []) {
     texts.delete(slug);
   }
 
+  /**
+   * Best first. Words match as written or by their start; a word that finds nothing that way is
+   * tried again within one typo, and a long one that still finds nothing within two (see
+   * `maxEdits`). Only the hits returned get a highlighted title and excerpt.
+   */
   function search(query: string, options: SearchOptions = {}): SearchHit[] {
     const q = query.trim();
     if (!q) return [];
-    const allowRetired = options.includeRetired ?? false;
-    const results = mini.search(q, { filter: (r) => r.status === 'published' || (allowRetired && r.status === 'retired') });
+    // A document boost of 0 drops a hit before MiniSearch builds its result; a filter would run
+    // after every result was built and scored.
+    const boostDocument = options.includeRetired ? undefined : publishedOnly;
+    const edits = new Map<string, number>();
+    let results = mini.search(q, { boostDocument });
+    for (const level of [1, 2]) {
+      const widen = unmatchedTerms(q, results).filter((t) => maxEdits(t) >= level);
+      if (!widen.length) break;
+      for (const t of widen) edits.set(t, level);
+      results = mini.search(q, { boostDocument, fuzzy: (t) => edits.get(t) ?? false });
+    }
+    // Hits mostly share their matched terms: compile each set of terms once per search.
+    const matchers = new Map<string, TermMatcher>();
     return results.slice(0, options.limit ?? 50).map((r) => {
       const doc = texts.get(String(r.id))!;
+      const key = r.terms.join(' ');
+      const matcher = matchers.get(key) ?? matchers.set(key, termMatcher(r.terms)).get(key)!;
       const inSummary = r.terms.some((t) => r.match[t]?.includes('summary'));
       const source = inSummary || !r.terms.some((t) => r.match[t]?.includes('body')) ? doc.summary : doc.body;
       return {
@@ -128,14 +116,28 @@ export function createSearchIndex(records: RecipeRecord[] = []) {
         score: r.score,
         status: doc.status,
         loopType: doc.loopType,
-        titleSegments: highlight(doc.title, r.terms),
-        excerptSegments: highlight(excerpt(source, r.terms), r.terms),
+        titleSegments: matcher.highlight(doc.title),
+        excerptSegments: matcher.highlight(matcher.excerpt(source)),
       };
     });
   }
 
   for (const r of records) addOrReplace(r);
   return { addOrReplace, remove, search, get size() { return mini.documentCount; } };
+}
+
+function publishedOnly(_id: unknown, _term: string, stored?: Record<string, unknown>): number {
+  return stored?.status === 'published' ? 1 : 0;
+}
+
+/** The query's words that no hit matched (stops looking once every word has matched). */
+function unmatchedTerms(query: string, results: SearchResult[]): string[] {
+  const missing = new Set(queryTerms(query));
+  for (const r of results) {
+    for (const t of r.queryTerms) missing.delete(t);
+    if (!missing.size) break;
+  }
+  return [...missing];
 }
 
 export type SearchIndex = ReturnType<typeof createSearchIndex>;
