@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type RunningServer } from '../support/server';
 import { readRecipeFiles } from '../../src/lib/recipes/file-reader';
 import { signInAs } from '../support/session';
+import { responseValidator } from '../support/openapi-validator';
 
 const files = readRecipeFiles();
 const published = files.filter((r) => r.data.status === 'published');
@@ -105,6 +106,15 @@ describe('GET /api/v1/search', () => {
     const scores = hits.map((h: { score: number }) => h.score);
     expect(scores).toEqual([...scores].sort((a, b) => b - a));
     expect(hits.map((h: { slug: string }) => h.slug)).not.toContain('htst-product-temperature-single-loop');
+  });
+
+  it('answers in the shape the OpenAPI document gives for GET /api/v1/search', async () => {
+    const validate = responseValidator();
+    for (const q of ['flow', 'pasturizer', 'zzzz-nothing']) {
+      const body = await (await get(`/api/v1/search?q=${encodeURIComponent(q)}`)).json();
+      expect(validate('/api/v1/search', 'get', body), q).toBeNull();
+    }
+    expect(validate('/api/v1/search', 'get', { hits: [{ slug: 'a', title: 'A' }] })).not.toBeNull();
   });
 
   it('answers a missing q with 400 invalid_request', async () => {

@@ -4,6 +4,7 @@ import { calcPaths } from './paths/calc';
 import { metaPaths } from './paths/meta';
 import { editorialPaths } from './paths/editorial';
 import { fieldDataPaths } from './paths/fielddata';
+import { searchPaths } from './paths/search';
 
 /**
  * The OpenAPI 3.1 document of /api/v1, generated from the same zod schemas that validate the
@@ -11,7 +12,7 @@ import { fieldDataPaths } from './paths/fielddata';
  * here; tests/lib/api/openapi.test.ts fails for any route file under src/pages/api/v1 that is
  * missing.
  */
-export const pathGroups: readonly ZodOpenApiPathsObject[] = [calcPaths, metaPaths, editorialPaths, fieldDataPaths];
+export const pathGroups: readonly ZodOpenApiPathsObject[] = [calcPaths, metaPaths, editorialPaths, fieldDataPaths, searchPaths];
 
 let cached: ReturnType<typeof createDocument> | null = null;
 
