@@ -17,6 +17,7 @@ import { impulseResponse, rampResponse, simulateInput, stepResponse, type TimeRe
 import { roots } from './roots';
 import { gridStep, timeGrid } from './time-grid';
 import { cabs } from './roots';
+import { boundedCount, stepLimit } from './budget';
 
 /** The loop's blocks: controller C (may be improper), plant G and sensor H with their dead times. */
 export interface Loop {
@@ -30,7 +31,7 @@ export type LoopInput = 'setpoint' | 'load';
 /**
  * Options for the fixed-step simulation. The step is at most tFinal/minSteps, the fastest time
  * constant of the loop's blocks, θ/4 and 0.5/loopBandwidth (but no more than maxSteps steps in
- * all), and it divides the loop dead time exactly so that delayed samples fall on stored ones.
+ * all, fewer for high orders: budget.ts), and it divides the loop dead time exactly so that delayed samples fall on stored ones.
  */
 export interface ClosedLoopOptions {
   /** Least number of internal steps over the horizon; default 250. */
@@ -164,9 +165,11 @@ export function closedLoopResponse(loop: Loop, t: readonly number[], drive: Loop
   if (degree(p.num) > degree(p.den)) {
     throw new ModelError('With dead time in the loop, controller times plant must be proper; add a derivative filter.', 'invalid_model', 'controller');
   }
-  const h = internalStep(span, theta, Math.max(fastestRate(p), fastestRate(hR)), options);
-  const steps = Math.ceil(span / h - 1e-9);
   const ss = cascade(toStateSpace(p), toStateSpace(hR));
+  // Higher orders take fewer steps (each costs n²), so the work stays within the budget.
+  const maxSteps = Math.min(options.maxSteps ?? 50000, stepLimit(ss.n));
+  const h = internalStep(span, theta, Math.max(fastestRate(p), fastestRate(hR)), { ...options, maxSteps });
+  const steps = boundedCount(Math.ceil(span / h - 1e-9), 2 * maxSteps + 2, 'The closed-loop simulation would need too many steps; shorten tFinal.', 'analyses.step.tFinal');
   const n = ss.n;
   const [cz, cm] = ss.c;
   const [dz, dm] = ss.d;

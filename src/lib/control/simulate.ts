@@ -8,6 +8,7 @@ import { ModelError } from './types';
 import { series } from './connect';
 import { discretizeStates as discretize, toStateSpace, type StateSpace } from './state-space';
 import { gridStep } from './time-grid';
+import { stepLimit } from './budget';
 
 /** A sampled response; t in s. */
 export interface TimeResponse {
@@ -35,6 +36,13 @@ function firstIndexAtOrAfter(t: readonly number[], instant: number): number {
 function propagate(g: TransferFunction, t: readonly number[], input: (tau: number) => number, impulse: boolean): number[] {
   const dt = gridStep(t);
   const ss = toStateSpace(g);
+  if (t.length > stepLimit(ss.n)) {
+    throw new ModelError(
+      `A response of ${t.length} points of a model of order ${ss.n} takes too much work; ask for at most ${stepLimit(ss.n)} points.`,
+      'invalid_request',
+      'analyses.step.points',
+    );
+  }
   const y = new Array<number>(t.length).fill(0);
   const k0 = firstIndexAtOrAfter(t, g.delay);
   if (k0 >= t.length) return y;

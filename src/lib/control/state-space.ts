@@ -5,6 +5,7 @@
  */
 import { ModelError, type TransferFunction } from './types';
 import { expm } from './matrix';
+import { checkStates } from './budget';
 
 /** Single-input realization; A is n×n row-major, C has one row per output. */
 export interface StateSpace {
@@ -18,6 +19,7 @@ export interface StateSpace {
 /** Controllable canonical form of a proper rational G (the delay is ignored here). */
 export function toStateSpace(g: TransferFunction): StateSpace {
   const n = g.den.length - 1;
+  checkStates(n);
   if (g.num.length - 1 > n) {
     throw new ModelError('An improper transfer function has no state-space form; add a filter.', 'invalid_model');
   }
@@ -70,6 +72,7 @@ function balance(ss: StateSpace): StateSpace {
 /** a then b in series, keeping both outputs: c[0], d[0] after a; c[1], d[1] after b. */
 export function cascade(first: StateSpace, second: StateSpace): StateSpace {
   const n = first.n + second.n;
+  checkStates(n);
   const a = new Float64Array(n * n);
   const b = new Float64Array(n);
   const n1 = first.n;

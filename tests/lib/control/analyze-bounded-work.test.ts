@@ -13,6 +13,12 @@ import { modelErrorOf } from './helpers';
 const pid: PidController = { form: 'ideal', kc: 2.1, ti: 11, td: 0.8, n: 10 };
 const lag10 = { num: [1], den: [10, 1], delay: 2 };
 
+function binomial(n: number, k: number): number {
+  let c = 1;
+  for (let i = 1; i <= k; i++) c = (c * (n - k + i)) / i;
+  return c;
+}
+
 function stepOf(req: AnalyzeRequest): { y: number[]; stable: boolean | undefined } {
   const r = analyze({ ...req, analyses: { step: { tFinal: 80, points: 801 }, poles: true } });
   return { y: r.step!.y, stable: r.stable };
@@ -48,6 +54,22 @@ describe('analyze', () => {
     expect(r.stable).toBe(false);
     expect(r.step!.info.finalValue).toBeNull();
     expect(r.step!.y.every(Number.isFinite)).toBe(true);
+  });
+
+  // (0.5s + 1)^k expanded: a block of order k (binomial coefficients).
+  const lagPower = (k: number) => Array.from({ length: k + 1 }, (_, i) => binomial(k, i) * 0.5 ** (k - i));
+  it('refuses the step of 20 blocks of order 20 in series (order 402 with the PID) at plant', () => {
+    const plant = Array.from({ length: 20 }, () => ({ num: [1], den: lagPower(20), delay: 0.05 }));
+    const e = modelErrorOf(() => analyze({ plant, controller: pid, analyses: { step: true } }));
+    expect(e).toMatchObject({ code: 'invalid_request', field: 'plant' });
+    // The frequency analyses of the same loop stay available.
+    expect(analyze({ plant, controller: pid, analyses: { margins: true } }).margins).toBeDefined();
+  });
+
+  it('refuses 100 000 points of an order-62 response at analyses.step.points', () => {
+    const plant = Array.from({ length: 3 }, () => ({ num: [1], den: lagPower(20), delay: 0 }));
+    const e = modelErrorOf(() => analyze({ plant, controller: pid, analyses: { step: { points: 100000 } } }));
+    expect(e.field).toBe('analyses.step.points');
   });
 
   it('refuses ti = 1e300 s with a ModelError instead of exhausting memory', () => {
