@@ -27,6 +27,8 @@ interface Sample {
 
 const MAX_RATIONAL_TURN = Math.PI / 6;
 const PER_DECADE = 16;
+/** Largest w·θ (rad) at which a scan value's phase is reused for the rational part. */
+const REUSE_TURNS = 1e6;
 
 /** arg(1 + L) on the branch that is continuous while |L| stays on the given side of 1. */
 function branchArg(s: Sample, outside: boolean): number {
@@ -57,11 +59,13 @@ export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopS
   // total phase would cancel all digits when w·θ is large.
   const rationalPart: FactoredModel = { ...m, delay: 0 };
   let closest = Infinity;
-  const sample = (w: number): Sample => {
+  const sample = (w: number, known?: { mag: number; phaseDeg: number }): Sample => {
     budget.spend(1);
-    pointInto(rationalPart, w, point);
-    const rational = (point.phaseDeg * Math.PI) / 180;
-    const s = { w, mag: point.mag, rational, phi: rational - w * m.delay };
+    // Scan values carry the delay; taking it back out is exact enough while w·θ is moderate.
+    const reuse = known !== undefined && w * m.delay < REUSE_TURNS;
+    const p = reuse ? known : pointInto(rationalPart, w, point);
+    const rational = (p.phaseDeg * Math.PI) / 180 + (reuse ? w * m.delay : 0);
+    const s = { w, mag: p.mag, rational, phi: rational - w * m.delay };
     closest = Math.min(closest, distance(s));
     return s;
   };
@@ -81,24 +85,36 @@ export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopS
     return branchArg(c, pOut) - branchArg(p, pOut) + branchArg(q, qOut) - branchArg(c, qOut);
   };
   const grid = gridBetween(a, b, scan);
-  let prev = sample(grid[0]);
+  let prev = sample(grid[0].w, grid[0].known);
   let delta = 0;
   for (let i = 1; i < grid.length; i++) {
-    const next = sample(grid[i]);
+    const next = sample(grid[i].w, grid[i].known);
     delta += turn(prev, next, 0);
     prev = next;
   }
   return { delta, closest };
 }
 
+interface GridPoint {
+  w: number;
+  /** L(jw) from the shared scan, when the point is one of its. */
+  known?: { mag: number; phaseDeg: number };
+}
+
 /** a, the scan's points inside (a, b), a logarithmic fill where the scan does not reach, b. */
-function gridBetween(a: number, b: number, scan: LoopScan | null): number[] {
-  const inside = scan ? scan.w.filter((w) => w > a && w < b) : [];
-  const fill = (from: number, to: number): number[] => {
+function gridBetween(a: number, b: number, scan: LoopScan | null): GridPoint[] {
+  const inside: GridPoint[] = [];
+  if (scan) {
+    for (let i = 0; i < scan.w.length; i++) {
+      const w = scan.w[i];
+      if (w > a && w < b) inside.push({ w, known: { mag: scan.mag[i], phaseDeg: scan.phaseDeg[i] } });
+    }
+  }
+  const fill = (from: number, to: number): GridPoint[] => {
     if (!(to > from)) return [];
     const n = Math.ceil(Math.log10(to / from) * PER_DECADE);
-    return Array.from({ length: Math.max(0, n - 1) }, (_, i) => from * (to / from) ** ((i + 1) / n));
+    return Array.from({ length: Math.max(0, n - 1) }, (_, i) => ({ w: from * (to / from) ** ((i + 1) / n) }));
   };
-  if (inside.length === 0) return [a, ...fill(a, b), b];
-  return [a, ...fill(a, inside[0]), ...inside, ...fill(inside[inside.length - 1], b), b];
+  if (inside.length === 0) return [{ w: a }, ...fill(a, b), { w: b }];
+  return [{ w: a }, ...fill(a, inside[0].w), ...inside, ...fill(inside[inside.length - 1].w, b), { w: b }];
 }
