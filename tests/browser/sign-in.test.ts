@@ -70,7 +70,7 @@ describe('signing in through the form in Chromium', () => {
     await page.getByLabel('Password').fill(admin.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${server.url}/`);
-    await page.getByRole('link', { name: 'Admin' }).click();
+    await page.getByRole('link', { name: 'Admin', exact: true }).click();
     await page.waitForURL(`${server.url}/admin/people`);
 
     await hydrated(page, 'Send invitation');
