@@ -24,7 +24,7 @@ export default function ThemeSwitch() {
       disabled={theme === null}
       data-testid="theme-switch"
       aria-label={theme === 'dark' ? 'Use the light palette' : 'Use the dark palette'}
-      className="rounded-md border border-rule px-2 py-1 text-sm text-muted hover:text-ink disabled:opacity-50"
+      className="whitespace-nowrap rounded-md border border-rule px-2 py-1 text-sm text-muted hover:text-ink disabled:opacity-50"
     >
       {theme === 'dark' ? '☀ Light' : '☾ Dark'}
     </button>

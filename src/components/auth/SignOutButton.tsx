@@ -9,7 +9,7 @@ export default function SignOutButton() {
     window.location.assign('/sign-in');
   }
   return (
-    <button type="button" onClick={signOut} disabled={busy} data-testid="sign-out" className="rounded-md border border-rule px-2 py-1 text-sm text-muted hover:text-ink">
+    <button type="button" onClick={signOut} disabled={busy} data-testid="sign-out" className="whitespace-nowrap rounded-md border border-rule px-2 py-1 text-sm text-muted hover:text-ink">
       {busy ? 'Signing out…' : 'Sign out'}
     </button>
   );
