@@ -117,6 +117,20 @@ describe('GET /api/v1/search', () => {
     expect(validate('/api/v1/search', 'get', { hits: [{ slug: 'a', title: 'A' }] })).not.toBeNull();
   });
 
+  it('answers list and single reads, published and retired, in the shape the OpenAPI document gives', async () => {
+    const validate = responseValidator();
+    for (const path of ['/api/v1/recipes', '/api/v1/recipes?status=retired']) {
+      const body = await (await get(path)).json();
+      expect(body.recipes.length, path).toBeGreaterThan(0);
+      expect(validate('/api/v1/recipes', 'get', body), path).toBeNull();
+    }
+    for (const slug of [published[0].slug, retired[0].slug]) {
+      const body = await (await get(`/api/v1/recipes/${slug}`)).json();
+      expect(validate('/api/v1/recipes/{slug}', 'get', body), slug).toBeNull();
+    }
+    expect(validate('/api/v1/recipes/{slug}', 'get', { slug: 'x' })).not.toBeNull();
+  });
+
   it('answers a missing q with 400 invalid_request', async () => {
     const res = await get('/api/v1/search');
     expect(res.status).toBe(400);

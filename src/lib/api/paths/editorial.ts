@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { ZodOpenApiOperationObject, ZodOpenApiPathsObject } from 'zod-openapi';
 import { errorResponses, jsonBody, jsonResponse } from '../openapi-parts';
 import { RecipeQuerySchema } from '../../recipes/query';
+import { ApiRecipeSchema } from '../../recipes/api-recipe-schema';
 import { CreateRecipeSchema, RatingSchema, RetireSchema, ReturnSchema, TemplateSchema, UpdateRecipeSchema } from '../../editorial/fields';
 
 const Slug = z.object({ slug: z.string().meta({ description: 'The recipe slug, e.g. htst-hot-water-temperature-pi.' }) });
@@ -51,7 +52,7 @@ export const editorialPaths: ZodOpenApiPathsObject = {
       operationId: 'listRecipes',
       summary: 'Recipes from files and the editor; without `status`, published ones only (drafts and reviews only to their owner and curators).',
       requestParams: { query: RecipeQuerySchema },
-      responses: { '200': jsonResponse('The recipes.', z.object({ recipes: z.array(RecipeOut.partial({ html: true }).extend({ source: z.enum(['file', 'authored']) })) })), ...errorResponses(400, 401) },
+      responses: { '200': jsonResponse('The recipes.', z.object({ recipes: z.array(ApiRecipeSchema) })), ...errorResponses(400, 401) },
     }),
     post: signedIn({
       operationId: 'createRecipe',
@@ -65,7 +66,7 @@ export const editorialPaths: ZodOpenApiPathsObject = {
       operationId: 'getRecipe',
       summary: 'One recipe, file or authored; 404 when it does not exist or you may not see it.',
       requestParams: { path: Slug },
-      responses: { '200': jsonResponse('The recipe.', RecipeOut.partial({ html: true }).extend({ source: z.enum(['file', 'authored']) })), ...errorResponses(401, 404) },
+      responses: { '200': jsonResponse('The recipe.', ApiRecipeSchema), ...errorResponses(401, 404) },
     }),
     put: signedIn({
       operationId: 'saveRecipe',
