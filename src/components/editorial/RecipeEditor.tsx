@@ -1,10 +1,14 @@
 import './editorial.css';
 import { useEffect, useRef, useState } from 'react';
 import { callApi, type ApiError } from './api';
+import ClaimFields from './ClaimFields';
 import ControllerFields, { type ControllerValue } from './ControllerFields';
+import { claimsPayload, sensorPayload, tuningPayload, type ClaimRow, type SensorRow, type TuningRow } from './loop-fields';
+import SensorFields from './SensorFields';
+import TuningFields from './TuningFields';
 import ModelFields, { type ModelValue } from './ModelFields';
 import Preview from './Preview';
-import { fieldsFromRecipe, type RecipeForForm } from './editor-fields';
+import { EMPTY_LOOP_FIELDS, fieldsFromRecipe, type RecipeForForm } from './editor-fields';
 
 /** The frontmatter fields the editor's form holds, and the body. */
 export interface EditorFields {
@@ -21,6 +25,13 @@ export interface EditorFields {
   cautions: string;
   model: ModelValue | null;
   controller: ControllerValue | null;
+  /** Where the model's numbers came from. */
+  modelSource: string;
+  /** Measurement path H(s), as typed; null = ideal sensor. */
+  sensor: SensorRow | null;
+  tuningRule: TuningRow;
+  /** Performance claims, one row each. */
+  claims: ClaimRow[];
   body: string;
 }
 
@@ -45,6 +56,8 @@ interface ConflictState {
 const list = (s: string) => s.split(',').map((x) => x.trim()).filter(Boolean);
 
 function payload(f: EditorFields) {
+  const sensor = sensorPayload(f.sensor);
+  const tuningRule = tuningPayload(f.tuningRule);
   return {
     title: f.title,
     summary: f.summary,
@@ -57,6 +70,10 @@ function payload(f: EditorFields) {
     cautions: f.cautions.split('\n').map((x) => x.trim()).filter(Boolean),
     ...(f.model ? { model: f.model } : {}),
     ...(f.controller ? { controller: f.controller } : {}),
+    ...(f.modelSource.trim() ? { modelSource: f.modelSource.trim() } : {}),
+    ...(sensor ? { sensor } : {}),
+    ...(tuningRule ? { tuningRule } : {}),
+    claims: claimsPayload(f.claims),
   };
 }
 
@@ -67,7 +84,7 @@ function payload(f: EditorFields) {
  */
 export default function RecipeEditor(props: RecipeEditorProps) {
   const backupKey = `loopwright-unsaved:${props.slug ?? 'new'}`;
-  const [fields, setFields] = useState<EditorFields>(props.initial);
+  const [fields, setFields] = useState<EditorFields>({ ...EMPTY_LOOP_FIELDS, ...props.initial });
   const [revision, setRevision] = useState(props.revision ?? 0);
   const [status, setStatus] = useState(props.status ?? 'draft');
   const [message, setMessage] = useState('');
@@ -84,7 +101,7 @@ export default function RecipeEditor(props: RecipeEditorProps) {
     setReady(true);
     try {
       const saved = localStorage.getItem(backupKey);
-      if (saved && saved !== JSON.stringify(props.initial)) setRestorable(JSON.parse(saved));
+      if (saved && saved !== JSON.stringify(props.initial)) setRestorable({ ...EMPTY_LOOP_FIELDS, ...props.initial, ...JSON.parse(saved) });
     } catch {
       // Private mode or a full store: the backup is a convenience only.
     }
@@ -151,7 +168,7 @@ export default function RecipeEditor(props: RecipeEditorProps) {
     el.setSelectionRange(offset, offset);
   }
 
-  const text = (key: 'title' | 'summary' | 'loopTags' | 'tags' | 'pvUnit' | 'mvUnit', label: string, hint?: string) => (
+  const text = (key: 'title' | 'summary' | 'loopTags' | 'tags' | 'pvUnit' | 'mvUnit' | 'modelSource', label: string, hint?: string) => (
     <label className="editor-field">
       <span>{label}</span>
       <input name={key} value={fields[key]} onChange={(e) => update({ [key]: e.target.value })} aria-invalid={error?.field === key} />
@@ -193,7 +210,11 @@ export default function RecipeEditor(props: RecipeEditorProps) {
           {text('mvUnit', 'Output unit (MV)', 'e.g. % valve, % speed')}
           {text('tags', 'Keywords', 'comma-separated')}
           <ModelFields value={fields.model} onChange={(model) => update({ model })} />
+          {text('modelSource', 'Where the model came from', 'e.g. bump test on TIC-210, 3 March, 5 % valve step')}
+          <SensorFields value={fields.sensor} onChange={(sensor) => update({ sensor })} invalidField={error?.field} />
           <ControllerFields value={fields.controller} onChange={(controller) => update({ controller })} />
+          <TuningFields value={fields.tuningRule} onChange={(tuningRule) => update({ tuningRule })} invalidField={error?.field} />
+          <ClaimFields rows={fields.claims} onChange={(claims) => update({ claims })} invalidField={error?.field} />
           <label className="editor-field">
             <span>Cautions for this loop (one a line)</span>
             <textarea name="cautions" rows={2} value={fields.cautions} onChange={(e) => update({ cautions: e.target.value })} />

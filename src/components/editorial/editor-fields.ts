@@ -1,4 +1,5 @@
 import type { EditorFields } from './RecipeEditor';
+import { claimRows, sensorRow, tuningRow } from './loop-fields';
 
 /** A recipe as the API answers it, as much of it as the editor's form holds. */
 export interface RecipeForForm {
@@ -13,6 +14,10 @@ export interface RecipeForForm {
   cautions?: string[];
   model?: unknown;
   controller?: unknown;
+  claims?: unknown;
+  sensor?: unknown;
+  tuningRule?: unknown;
+  modelSource?: string | null;
 }
 
 /** The editor's form fields from a recipe (lists become comma- or line-separated text). */
@@ -29,6 +34,13 @@ export function fieldsFromRecipe(r: RecipeForForm): EditorFields {
     cautions: (r.cautions ?? []).join('\n'),
     model: (r.model as EditorFields['model']) ?? null,
     controller: (r.controller as EditorFields['controller']) ?? null,
+    claims: claimRows(r.claims),
+    sensor: sensorRow(r.sensor),
+    tuningRule: tuningRow(r.tuningRule),
+    modelSource: r.modelSource ?? '',
     body: r.body,
   };
 }
+
+/** The new-field defaults, for a form started from a template or restored from an older backup. */
+export const EMPTY_LOOP_FIELDS = { claims: [], sensor: null, tuningRule: { rule: '', designTime: '', note: '' }, modelSource: '' } satisfies Pick<EditorFields, 'claims' | 'sensor' | 'tuningRule' | 'modelSource'>;

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { ClaimSchema, PidControllerSchema, ProcessModelSchema, TransferFunctionSchema } from '../schemas';
 import { BODY_LIMITS } from '../recipes/authored-mdx/limits';
-import { LoopTagSchema, LoopUnitsSchema } from '../recipes/schema';
+import { LoopTagSchema, LoopUnitsSchema, TuningRuleRefSchema } from '../recipes/schema';
 import { AREA_CODES, LOOP_TYPES } from '../recipes/vocabulary';
 
 export { LOOP_TYPES };
@@ -28,6 +28,10 @@ export const AuthoredFieldsSchema = z.object({
   claims: z.array(ClaimSchema).max(40).optional(),
   /** Measurement path H(s). */
   sensor: TransferFunctionSchema.optional(),
+  /** How the controller was tuned: the rule, its design time (s) and any note. */
+  tuningRule: TuningRuleRefSchema.extend({ note: z.string().trim().max(400, 'Keep the tuning note under 400 characters.').optional() }).optional(),
+  /** Where the model's numbers came from (step test, design data, vendor sheet). */
+  modelSource: z.string().trim().min(3, 'Say in at least 3 characters where the model came from.').max(400, 'Keep the model source under 400 characters.').optional(),
   /** Process-area code of the plant, e.g. "htst" (the file recipes' codes). */
   area: z.enum(AREA_CODES, { message: `area is one of ${AREA_CODES.join(', ')}.` }).optional(),
   /** Units of the measurement (pv) and controller output (mv), e.g. °C and % valve. */

@@ -31,6 +31,8 @@ export function toApiRecipe(row: AuthoredRecipeWithRevision, rating: RatingSumma
     controller: fm.controller ?? null,
     claims: fm.claims ?? [],
     sensor: fm.sensor ?? null,
+    tuningRule: fm.tuningRule ?? null,
+    modelSource: fm.modelSource ?? null,
     area: fm.area ?? null,
     loopTags: fm.loopTags ?? [],
     units: fm.units ?? null,

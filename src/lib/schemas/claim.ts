@@ -1,29 +1,18 @@
 import { z } from 'zod';
+import { CLAIM_INPUTS, CLAIM_METRICS, CLAIM_OPS } from './claim-vocabulary';
 
-/** What a recipe may promise about its loop; units as in the contract (s, %, degrees, ratio). */
-export const CLAIM_METRICS = [
-  'overshootPct', // % of the final value, setpoint or load step
-  'riseTime', // s, 10–90 %
-  'settlingTime', // s, 2 % band, from t = 0
-  'peak', // largest |y| — for a load step, the worst deviation per unit load
-  'iae', // integral of |error| over the step, for a unit step
-  'phaseMarginDeg', // degrees
-  'gainMargin', // ratio
-  'delayMargin', // s
-  'ms', // peak sensitivity
-  'mt', // complementary peak
-] as const;
+export { CLAIM_METRICS };
 
 /** One performance claim of a recipe, e.g. overshoot ≤ 5 % on a setpoint step. */
 export const ClaimSchema = z.object({
   /** The figure the claim is about. */
-  metric: z.enum(CLAIM_METRICS),
+  metric: z.enum(CLAIM_METRICS, { message: `metric is one of ${CLAIM_METRICS.join(', ')}.` }),
   /** The direction of the bound. */
-  op: z.enum(['<=', '>=']),
+  op: z.enum(CLAIM_OPS, { message: 'op is <= or >=.' }),
   /** The bound, in the metric's unit. */
-  value: z.number(),
+  value: z.number({ message: "A claim's value is a number in its metric's unit, e.g. 5 for 5 % overshoot." }),
   /** For time-response metrics: which step (default setpoint). */
-  input: z.enum(['setpoint', 'load']).default('setpoint'),
+  input: z.enum(CLAIM_INPUTS, { message: 'input is setpoint or load.' }).default('setpoint'),
 });
 
 export type Claim = z.infer<typeof ClaimSchema>;
