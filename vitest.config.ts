@@ -11,7 +11,7 @@ export default defineConfig({
     reporters: ['default', 'json'],
     outputFile: { json: 'test-artifacts/vitest-report.json' },
     projects: [
-      { test: { name: 'unit', include: ['tests/lib/**/*.test.ts'], environment: 'node' } },
+      { test: { name: 'unit', include: ['tests/lib/**/*.test.ts', 'tests/components/**/*.test.ts'], environment: 'node' } },
       { test: { name: 'api', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000 } },
       {
         test: {

@@ -2,6 +2,9 @@ import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vites
 import { createRecipe } from '../../../src/lib/editorial/create';
 import { saveRecipe } from '../../../src/lib/editorial/save';
 import { EditorialError } from '../../../src/lib/editorial/errors';
+import { authoredRecords } from '../../../src/lib/editorial/records';
+import { reload } from '../../../src/lib/editorial/load';
+import { UpdateRecipeSchema } from '../../../src/lib/editorial/fields';
 import { stopCompileWorker } from '../../../src/lib/recipes/authored-mdx/compile-isolated';
 import { DRAFT, PEOPLE, testContext } from './context';
 
@@ -72,6 +75,26 @@ describe('saveRecipe', () => {
     ]);
   });
 
+  it('keeps claims, sensor, tuning rule and model source through a save and a reload, and a later save of other fields', async () => {
+    const loop = {
+      claims: [{ metric: 'overshootPct' as const, op: '<=' as const, value: 5, input: 'setpoint' as const }, { metric: 'phaseMarginDeg' as const, op: '>=' as const, value: 45, input: 'setpoint' as const }],
+      sensor: { num: [1], den: [4, 1], delay: 0 },
+      tuningRule: { rule: 'simc' as const, designTime: 12, note: 'ti rounded to 45 s' },
+      modelSource: 'Bump test on TIC-210, 5 % valve step, 3 March',
+    };
+    await saveRecipe(t.ctx, PEOPLE.author, slug, { baseRevision: 1, ...loop, message: 'Claims and tuning rule' });
+    await saveRecipe(t.ctx, PEOPLE.author, slug, { baseRevision: 2, summary: 'Holds the HTST hot-water set; PI tuned by SIMC from the March bump test.' });
+    expect(await reload(t.knex, slug)).toMatchObject({ revision: 3, ...loop });
+    const [record] = await authoredRecords(t.knex);
+    expect(record.data).toMatchObject({ tuningRule: loop.tuningRule, modelSource: loop.modelSource, claims: loop.claims, sensor: loop.sensor });
+  });
+
+  it('reads a draft without a tuning rule or model source as none in the API and as neutral defaults on its page', async () => {
+    expect(await reload(t.knex, slug)).toMatchObject({ tuningRule: null, modelSource: null, claims: [], sensor: null });
+    const [record] = await authoredRecords(t.knex);
+    expect(record.data).toMatchObject({ tuningRule: { rule: 'field' }, claims: [] });
+  });
+
   it('answers 409 conflict with the current recipe for a stale base revision, changing nothing', async () => {
     await saveRecipe(t.ctx, PEOPLE.author, slug, { baseRevision: 1, body: 'Mine.' });
     const err = await refusal(saveRecipe(t.ctx, PEOPLE.curator, slug, { baseRevision: 1, body: 'Theirs.' }));
@@ -109,5 +132,29 @@ describe('saveRecipe', () => {
 
   it('answers 409 read_only for a file recipe', async () => {
     expect(await refusal(saveRecipe(t.ctx, PEOPLE.curator, 'raw-milk-transfer-flow', { baseRevision: 1, title: 'Changed' }))).toMatchObject({ status: 409, code: 'read_only' });
+  });
+});
+
+describe('UpdateRecipeSchema', () => {
+  const refusal = (body: unknown) => {
+    const r = UpdateRecipeSchema.safeParse(body);
+    return r.success ? null : { field: r.error.issues[0].path.join('.'), message: r.error.issues[0].message };
+  };
+
+  it.each([
+    ['a claim value that is not a number', { claims: [{ metric: 'overshootPct', op: '<=', value: 'five' }] }, 'claims.0.value'],
+    ['an empty claim value', { claims: [{ metric: 'iae', op: '<=', value: 2 }, { metric: 'overshootPct', op: '<=', value: '' }] }, 'claims.1.value'],
+    ['an unknown claim metric', { claims: [{ metric: 'overshoot', op: '<=', value: 5 }] }, 'claims.0.metric'],
+    ['an unknown claim op', { claims: [{ metric: 'overshootPct', op: '<', value: 5 }] }, 'claims.0.op'],
+    ['an unknown tuning rule', { tuningRule: { rule: 'guesswork' } }, 'tuningRule.rule'],
+    ['a design time that is not positive', { tuningRule: { rule: 'lambda', designTime: 0 } }, 'tuningRule.designTime'],
+    ['a model source of one letter', { modelSource: 'x' }, 'modelSource'],
+    ['a sensor without a denominator', { sensor: { num: [1], den: [] } }, 'sensor.den'],
+  ])('refuses %s and names the field', (_, fields, field) => {
+    expect(refusal({ baseRevision: 1, ...fields })).toMatchObject({ field });
+  });
+
+  it('accepts the fields the editor sends for a complete loop', () => {
+    expect(refusal({ baseRevision: 1, claims: [{ metric: 'settlingTime', op: '<=', value: 120, input: 'load' }], tuningRule: { rule: 'field' }, modelSource: 'Vendor sheet', sensor: { num: [1], den: [2, 1] } })).toBeNull();
   });
 });
