@@ -32,6 +32,21 @@ describe('the editorial flow over HTTP', () => {
     expect(stars).toMatchObject({ status: 400, body: { error: { field: 'stars' } } });
   });
 
+  it('keeps a claim and a tuning rule through a save and a reload, and answers a bad claim value with 400 and its field', async () => {
+    const created = await as.author.call('POST', '/api/v1/recipes', sampleRecipe('CIP caustic return temperature'));
+    expect(created.status).toBe(201);
+    const slug = created.body.slug as string;
+    const claim = { metric: 'overshootPct', op: '<=', value: 5, input: 'setpoint' };
+    const tuningRule = { rule: 'lambda', designTime: 90 };
+    const bad = await as.author.call('PUT', `/api/v1/recipes/${slug}`, { baseRevision: 1, tuningRule, claims: [claim, { ...claim, value: 'five' }] });
+    expect(bad).toMatchObject({ status: 400, body: { error: { code: 'invalid_request', field: 'claims.1.value' } } });
+    // Until a rule is written the library reads the draft with the neutral default.
+    expect((await as.author.call('GET', `/api/v1/recipes/${slug}`)).body).toMatchObject({ revision: 1, claims: [], tuningRule: { rule: 'field' } });
+    const saved = await as.author.call('PUT', `/api/v1/recipes/${slug}`, { baseRevision: 1, tuningRule, claims: [claim], modelSource: 'Bump test on TIC-540' });
+    expect(saved).toMatchObject({ status: 200, body: { revision: 2, claims: [claim], tuningRule, modelSource: 'Bump test on TIC-540' } });
+    expect((await as.author.call('GET', `/api/v1/recipes/${slug}`)).body).toMatchObject({ revision: 2, claims: [claim], tuningRule });
+  });
+
   it('proves a concurrent edit answers 409 with the current recipe and loses nothing', async () => {
     const { body: created } = await as.author.call('POST', '/api/v1/recipes', sampleRecipe('Wastewater pH neutralisation'));
     const path = `/api/v1/recipes/${created.slug}`;

@@ -72,6 +72,27 @@ describe('the editorial path in the browser', () => {
     await page.waitForURL(/\/recipes\/glycol-chiller-supply-temperature\/edit\?created=1/);
     slug = 'glycol-chiller-supply-temperature';
     await page.locator('[data-testid=recipe-editor][data-ready=true]').waitFor();
+    // A claim with a value that is not a number is refused with its field, and the typed text stays.
+    await editor.getByTestId('add-claim').click();
+    await editor.locator('select[name="claims.0.metric"]').selectOption('overshootPct');
+    await editor.locator('select[name="claims.0.op"]').selectOption('<=');
+    await editor.locator('input[name="claims.0.value"]').fill('5 %');
+    await editor.locator('select[name="tuningRule.rule"]').selectOption('simc');
+    await editor.locator('input[name="tuningRule.designTime"]').fill('40');
+    await page.getByTestId('save').click();
+    await expect.poll(() => page.getByTestId('editor-error').textContent()).toContain('(field: claims.0.value)');
+    expect(await editor.locator('input[name="claims.0.value"]').inputValue()).toBe('5 %');
+    await editor.locator('input[name="claims.0.value"]').fill('5');
+    await page.getByTestId('save').click();
+    await expect.poll(() => page.getByTestId('editor-notice').textContent()).toContain('Saved as revision 2');
+    // Both survive a reload of the page from the server.
+    await page.reload();
+    await page.locator('[data-testid=recipe-editor][data-ready=true]').waitFor();
+    expect(await editor.getByTestId('claim-row').count()).toBe(1);
+    expect(await editor.locator('select[name="claims.0.metric"]').inputValue()).toBe('overshootPct');
+    expect(await editor.locator('input[name="claims.0.value"]').inputValue()).toBe('5');
+    expect(await editor.locator('select[name="tuningRule.rule"]').inputValue()).toBe('simc');
+    expect(await editor.locator('input[name="tuningRule.designTime"]').inputValue()).toBe('40');
     await page.getByTestId('submit').click();
     await expect.poll(() => page.getByTestId('editor-notice').textContent()).toContain('Submitted');
     await page.screenshot({ path: artifactPath('editorial-editor.png'), fullPage: true });
