@@ -55,10 +55,13 @@ interface ConflictState {
 
 const list = (s: string) => s.split(',').map((x) => x.trim()).filter(Boolean);
 
-function payload(f: EditorFields) {
+/** The request body; an update sends null for an emptied sensor, tuning rule or model source so the saved one is removed. */
+function payload(f: EditorFields, update: boolean) {
   const sensor = sensorPayload(f.sensor);
   const tuningRule = tuningPayload(f.tuningRule);
+  const cleared = update ? { sensor: null, tuningRule: null, modelSource: null } : {};
   return {
+    ...cleared,
     title: f.title,
     summary: f.summary,
     loopType: f.loopType,
@@ -125,8 +128,8 @@ export default function RecipeEditor(props: RecipeEditorProps) {
     setError(null);
     setNotice(null);
     const res = props.slug
-      ? await callApi<{ revision: number; status: string; slug: string }>('PUT', `/api/v1/recipes/${props.slug}`, { baseRevision: base, message: message || undefined, ...payload(current) })
-      : await callApi<{ revision: number; status: string; slug: string }>('POST', '/api/v1/recipes', { message: message || undefined, ...payload(current) });
+      ? await callApi<{ revision: number; status: string; slug: string }>('PUT', `/api/v1/recipes/${props.slug}`, { baseRevision: base, message: message || undefined, ...payload(current, true) })
+      : await callApi<{ revision: number; status: string; slug: string }>('POST', '/api/v1/recipes', { message: message || undefined, ...payload(current, false) });
     setBusy(null);
     if (res.ok) {
       localStorage.removeItem(backupKey);

@@ -58,6 +58,12 @@ export const UpdateRecipeSchema = AuthoredFieldsSchema.partial().extend({
   baseRevision: z.number({ message: 'Give baseRevision: the revision your change is based on.' }).int().min(1),
   /** What changed, in a few words ("ti from field test"). */
   message: z.string().trim().max(200).optional(),
+  /** null removes the sensor (ideal measurement again); absent keeps it. */
+  sensor: AuthoredFieldsSchema.shape.sensor.unwrap().nullable().optional(),
+  /** null removes the tuning rule (not stated yet); absent keeps it. */
+  tuningRule: AuthoredFieldsSchema.shape.tuningRule.unwrap().nullable().optional(),
+  /** null removes the model source; absent keeps it. */
+  modelSource: AuthoredFieldsSchema.shape.modelSource.unwrap().nullable().optional(),
 });
 
 /** POST …/return. */

@@ -35,7 +35,8 @@ export async function saveRecipe(ctx: EditorialContext, actor: Actor, slug: stri
   const { baseRevision, message, body: newBody, ...changes } = input;
   const body = newBody ?? row.revision.body;
   const html = newBody === undefined ? row.revision.html : await compileForSave(newBody);
-  const frontmatter = { ...frontmatterOf(row), ...changes };
+  // A null change removes the field, so the stored frontmatter never holds null.
+  const frontmatter = Object.fromEntries(Object.entries({ ...frontmatterOf(row), ...changes }).filter(([, v]) => v !== null));
   const now = ctx.now();
   const next = baseRevision + 1;
   const saved = await ctx.knex.transaction(async (trx) => {

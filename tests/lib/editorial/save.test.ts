@@ -89,6 +89,14 @@ describe('saveRecipe', () => {
     expect(record.data).toMatchObject({ tuningRule: loop.tuningRule, modelSource: loop.modelSource, claims: loop.claims, sensor: loop.sensor });
   });
 
+  it('removes a sensor, tuning rule or model source saved as null, and keeps one left out', async () => {
+    await saveRecipe(t.ctx, PEOPLE.author, slug, { baseRevision: 1, sensor: { num: [1], den: [4, 1], delay: 0 }, tuningRule: { rule: 'imc', designTime: 20 }, modelSource: 'Vendor sheet for TT-210' });
+    await saveRecipe(t.ctx, PEOPLE.author, slug, { baseRevision: 2, sensor: null, tuningRule: null });
+    expect(await reload(t.knex, slug)).toMatchObject({ revision: 3, sensor: null, tuningRule: null, modelSource: 'Vendor sheet for TT-210' });
+    const stored = await t.knex('recipe_revisions').where({ revision: 3 }).first('frontmatter_json');
+    expect(Object.keys(JSON.parse(stored.frontmatter_json))).not.toContain('tuningRule');
+  });
+
   it('reads a draft without a tuning rule or model source as none in the API and as neutral defaults on its page', async () => {
     expect(await reload(t.knex, slug)).toMatchObject({ tuningRule: null, modelSource: null, claims: [], sensor: null });
     const [record] = await authoredRecords(t.knex);
