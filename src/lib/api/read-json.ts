@@ -1,4 +1,5 @@
 import { ApiError, tooLargeMessage, UNSUPPORTED_MEDIA_MESSAGE } from './errors';
+import { readLimited } from './read-limited';
 
 /** The largest request body any JSON route reads: 1 MB. */
 export const MAX_BODY_BYTES = 1024 * 1024;
@@ -25,9 +26,7 @@ export async function readJson(request: Request, options: ReadJsonOptions = {}):
   if (!isJsonContentType(request.headers.get('content-type'))) {
     throw new ApiError(415, 'unsupported_media_type', UNSUPPORTED_MEDIA_MESSAGE);
   }
-  const declared = Number(request.headers.get('content-length'));
-  if (Number.isFinite(declared) && declared > limit) throw tooLarge(limit);
-  const text = decode(await readLimited(request, limit));
+  const text = decode(await readLimited(request, limit, () => tooLarge(limit)));
   if (text.trim() === '') {
     throw new ApiError(400, 'invalid_json', 'The request body is empty; send a JSON object.');
   }
@@ -45,30 +44,6 @@ export async function readJson(request: Request, options: ReadJsonOptions = {}):
 
 function tooLarge(limit: number): ApiError {
   return new ApiError(413, 'body_too_large', tooLargeMessage(limit));
-}
-
-async function readLimited(request: Request, limit: number): Promise<Uint8Array> {
-  if (!request.body) return new Uint8Array(0);
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > limit) {
-      await reader.cancel().catch(() => undefined);
-      throw tooLarge(limit);
-    }
-    chunks.push(value);
-  }
-  const bytes = new Uint8Array(total);
-  let offset = 0;
-  for (const chunk of chunks) {
-    bytes.set(chunk, offset);
-    offset += chunk.byteLength;
-  }
-  return bytes;
 }
 
 function decode(bytes: Uint8Array): string {

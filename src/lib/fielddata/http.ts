@@ -9,6 +9,7 @@ import { EditorialError } from '../editorial/errors';
 import type { Actor } from './actor';
 import { STEP_TEST_LIMITS } from './csv';
 import { FieldDataProblem } from './problem';
+import { readLimited } from '../api/read-limited';
 import { stepTestFolder } from './storage';
 
 /** Room for the multipart envelope and the small text fields around a 5 MB file. */
@@ -68,7 +69,7 @@ export interface Upload {
  */
 export async function readUpload(request: Request, limit: number = STEP_TEST_LIMITS.maxBytes, what = 'a step-test file'): Promise<Upload> {
   const type = (request.headers.get('content-type') ?? '').toLowerCase();
-  const raw = await readLimited(request, limit + MULTIPART_OVERHEAD, limit, what);
+  const raw = await readLimited(request, limit + MULTIPART_OVERHEAD, (seen) => tooLarge(seen, limit, what));
   if (type.startsWith('text/csv') || type.startsWith('text/plain')) {
     if (raw.byteLength > limit) throw tooLarge(raw.byteLength, limit, what);
     return { bytes: raw, fileName: '', fields: {} };
@@ -96,35 +97,9 @@ function tooLarge(bytes: number, limit: number, what: string): FieldDataProblem 
   return new FieldDataProblem(413, 'body_too_large', `The file is ${(bytes / 1024 / 1024).toFixed(1)} MB; ${what} may be at most ${mb(limit)} MB.`, 'file');
 }
 
-async function readLimited(request: Request, cap: number, limit: number, what = 'a request body'): Promise<Uint8Array> {
-  const declared = Number(request.headers.get('content-length'));
-  if (Number.isFinite(declared) && declared > cap) throw tooLarge(declared, limit, what);
-  if (!request.body) return new Uint8Array(0);
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > cap) {
-      await reader.cancel().catch(() => undefined);
-      throw tooLarge(total, limit, what);
-    }
-    chunks.push(value);
-  }
-  const out = new Uint8Array(total);
-  let offset = 0;
-  for (const c of chunks) {
-    out.set(c, offset);
-    offset += c.byteLength;
-  }
-  return out;
-}
-
 /** A JSON body (1 MB at most); an empty body is `{}` when `optional`. The services validate it. */
 export async function readJsonBody(request: Request, optional = false): Promise<unknown> {
-  const raw = await readLimited(request, 1024 * 1024, 1024 * 1024).catch(() => {
+  const raw = await readLimited(request, 1024 * 1024, (seen) => tooLarge(seen, 1024 * 1024, 'a request body')).catch(() => {
     throw new FieldDataProblem(413, 'body_too_large', 'The request body is larger than 1 MB.');
   });
   const text = new TextDecoder().decode(raw);
