@@ -6,7 +6,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startServer, type RunningServer } from '../../support/server';
+import type { RunningServer } from '../../support/server';
+import { postCalc, startCalcServer } from '../../support/calc-http';
 
 const FIXTURES = path.resolve('tests/reference/fixtures');
 const read = (name: string) => JSON.parse(fs.readFileSync(path.join(FIXTURES, name), 'utf8'));
@@ -16,20 +17,11 @@ const discrete = read('discrete.json');
 
 let server: RunningServer;
 beforeAll(async () => {
-  server = await startServer({ env: { LOOPWRIGHT_CALC_RATE_PER_MIN: '100000', LOOPWRIGHT_CALC_BURST: '100000' } });
+  server = await startCalcServer();
 });
 afterAll(async () => server?.stop());
 
-async function post(route: string, body: unknown): Promise<any> {
-  const res = await fetch(`${server.url}/api/v1/calc/${route}`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify(body),
-  });
-  const json = await res.json();
-  if (res.status !== 200) throw new Error(`${route} answered ${res.status}: ${JSON.stringify(json)}`);
-  return json;
-}
+const post = (route: string, body: unknown) => postCalc(server.url, route, body);
 
 function near(actual: number | null, expected: number | null, rel: number) {
   if (expected === null) return expect(actual).toBeNull();
