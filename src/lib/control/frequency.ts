@@ -26,6 +26,40 @@ export interface FactoredModel {
   zi: Float64Array;
   pr: Float64Array;
   pi: Float64Array;
+  /** The blocks' non-constant polynomials, numerators then denominators (Horner evaluation). */
+  horner: HornerForm;
+}
+
+/**
+ * The blocks prepared for Horner's rule: constants folded into one factor, the other
+ * polynomials in ascending powers (for w ≤ 1) and as given (the reversed polynomial in 1/(jw),
+ * for w > 1), and the net degree Σ deg num − Σ deg den.
+ */
+interface HornerForm {
+  constant: number;
+  ascending: Float64Array[];
+  descending: Float64Array[];
+  /** How many of the lists' polynomials are numerators (they come first). */
+  numerators: number;
+  netDegree: number;
+}
+
+function hornerForm(blocks: readonly { num: number[]; den: number[] }[]): HornerForm {
+  let constant = 1, netDegree = 0;
+  const nums: number[][] = [], dens: number[][] = [];
+  for (const b of blocks) {
+    if (b.num.length === 1) constant *= b.num[0]; else nums.push(b.num);
+    if (b.den.length === 1) constant /= b.den[0]; else dens.push(b.den);
+    netDegree += b.num.length - b.den.length;
+  }
+  const all = [...nums, ...dens];
+  return {
+    constant,
+    ascending: all.map((p) => Float64Array.from(p).reverse()),
+    descending: all.map((p) => Float64Array.from(p)),
+    numerators: nums.length,
+    netDegree,
+  };
 }
 
 /** Factored form of the series connection of the blocks (no cancellation of equal pairs). */
@@ -82,64 +116,64 @@ export function fromFactors(gain: number, zeros: Complex[], poles: Complex[], de
     zi: Float64Array.from(zeros, (z) => z.im),
     pr: Float64Array.from(poles, (p) => p.re),
     pi: Float64Array.from(poles, (p) => p.im),
+    horner: hornerForm(blocks),
   };
 }
 
-/**
- * p(jw) = (jw)^k·(re + j·im)·e^(logScale): below w = 1 by Horner in jw (k = 0, logScale = 0);
- * above, the reversed polynomial at 1/(jw), so the caller can combine blocks without overflow.
- */
-interface PolyValue { re: number; im: number; quarterTurns: number }
-
-function polyAtJw(p: readonly number[], w: number, out: PolyValue): void {
-  const n = p.length - 1;
-  let re = 0, im = 0;
-  if (w <= 1) {
-    for (let i = 0; i <= n; i++) {
-      const r = -im * w + p[i];
-      im = re * w;
-      re = r;
-    }
-    out.re = re; out.im = im; out.quarterTurns = 0;
-    return;
-  }
-  // q(y) = Σ p[i]·y^i with y = 1/(jw) = −j/w, so p(jw) = (jw)^n·q(y).
-  const y = -1 / w;
-  for (let i = n; i >= 0; i--) {
-    const r = -im * y + p[i];
-    im = re * y;
-    re = r;
-  }
-  out.re = re; out.im = im; out.quarterTurns = n;
-}
-
-const scratch: PolyValue = { re: 0, im: 0, quarterTurns: 0 };
-
 const hornerOut = { mag: 0, arg: 0 };
 
-/** |G(jw)| and the Horner phase (rad, within a multiple of 2π), block by block (into a scratch object). */
+/** w^k for an integer k: repeated products for the usual small k (Math.pow costs far more). */
+function integerPower(w: number, k: number): number {
+  if (k === 0) return 1;
+  if (k > 8 || k < -8) return Math.pow(w, k);
+  let v = w;
+  for (let i = 1; i < Math.abs(k); i++) v *= w;
+  return k > 0 ? v : 1 / v;
+}
+
+/** Running products beyond these bounds are rescaled, so long chains neither overflow nor underflow. */
+const RESCALE_HIGH = 1e100, RESCALE_LOW = 1e-100;
+
+/**
+ * |G(jw)| and the Horner phase (rad, within a multiple of 2π), polynomial by polynomial (into a
+ * scratch object). Below w = 1 each polynomial is evaluated in jw; above, as (jw)^n·q(1/(jw))
+ * with q the reversed polynomial, and the powers of jw are put back once at the end.
+ */
 function hornerAt(m: FactoredModel, w: number): { mag: number; arg: number } {
-  let logScale = 0, turns = 0, re = 1, im = 0;
+  const f = m.horner;
   const big = w > 1;
-  for (const b of m.blocks) {
-    polyAtJw(b.num, w, scratch);
-    let r = re * scratch.re - im * scratch.im;
-    im = re * scratch.im + im * scratch.re;
-    re = r;
-    turns += scratch.quarterTurns;
-    polyAtJw(b.den, w, scratch);
-    const d = scratch.re * scratch.re + scratch.im * scratch.im;
-    r = (re * scratch.re + im * scratch.im) / d;
-    im = (im * scratch.re - re * scratch.im) / d;
-    re = r;
-    turns -= scratch.quarterTurns;
-    // Keep the running product near 1 so that long chains neither overflow nor underflow.
-    const a = Math.abs(re) + Math.abs(im);
-    if (a > 1e100 || (a < 1e-100 && a > 0)) { re /= a; im /= a; logScale += Math.log(a); }
+  const x = big ? -1 / w : w;
+  const list = big ? f.descending : f.ascending;
+  let nre = 1, nim = 0, dre = 1, dim = 0, logScale = 0;
+  for (let k = 0; k < list.length; k++) {
+    const p = list[k];
+    // Horner in jx: (re + j·im)·jx + c = (c − im·x) + j·re·x.
+    let re = 0, im = 0;
+    for (let i = p.length - 1; i >= 0; i--) {
+      const r = p[i] - im * x;
+      im = re * x;
+      re = r;
+    }
+    if (k < f.numerators) {
+      const r = nre * re - nim * im;
+      nim = nre * im + nim * re;
+      nre = r;
+      const a = Math.abs(nre) + Math.abs(nim);
+      if (a > RESCALE_HIGH || (a < RESCALE_LOW && a > 0)) { nre /= a; nim /= a; logScale += Math.log(a); }
+    } else {
+      const r = dre * re - dim * im;
+      dim = dre * im + dim * re;
+      dre = r;
+      const a = Math.abs(dre) + Math.abs(dim);
+      if (a > RESCALE_HIGH || (a < RESCALE_LOW && a > 0)) { dre /= a; dim /= a; logScale -= Math.log(a); }
+    }
   }
-  // Above w = 1 each polynomial was evaluated as (jw)^n·q(1/(jw)): the powers of w net out here.
-  hornerOut.mag = Math.sqrt(re * re + im * im) * (big && turns !== 0 ? Math.pow(w, turns) : 1) * (logScale !== 0 ? Math.exp(logScale) : 1);
-  hornerOut.arg = Math.atan2(im, re) + (turns * Math.PI) / 2;
+  const d = dre * dre + dim * dim;
+  const re = (nre * dre + nim * dim) / d;
+  const im = (nim * dre - nre * dim) / d;
+  const turns = big ? f.netDegree : 0;
+  hornerOut.mag = Math.sqrt(re * re + im * im) * Math.abs(f.constant) * integerPower(w, turns) * (logScale !== 0 ? Math.exp(logScale) : 1);
+  hornerOut.arg = Math.atan2(im, re) + (f.constant < 0 ? Math.PI : 0) + (turns * Math.PI) / 2;
   return hornerOut;
 }
 
@@ -157,10 +191,14 @@ function roughAtan2(y: number, x: number): number {
 
 /** Root-angle phase in rad (the contract's definition, before the dead time). */
 function rootPhase(m: FactoredModel, w: number, exact: boolean): number {
-  const at = exact ? Math.atan2 : roughAtan2;
   let ph = m.gain < 0 ? Math.PI : 0;
-  for (let i = 0; i < m.zr.length; i++) ph += at(w - m.zi[i], -m.zr[i]);
-  for (let i = 0; i < m.pr.length; i++) ph -= at(w - m.pi[i], -m.pr[i]);
+  if (exact) {
+    for (let i = 0; i < m.zr.length; i++) ph += Math.atan2(w - m.zi[i], -m.zr[i]);
+    for (let i = 0; i < m.pr.length; i++) ph -= Math.atan2(w - m.pi[i], -m.pr[i]);
+  } else {
+    for (let i = 0; i < m.zr.length; i++) ph += roughAtan2(w - m.zi[i], -m.zr[i]);
+    for (let i = 0; i < m.pr.length; i++) ph -= roughAtan2(w - m.pi[i], -m.pr[i]);
+  }
   return ph;
 }
 
