@@ -11,12 +11,19 @@ export function identity(n: number): Float64Array {
 }
 
 export function matMul(a: Float64Array, b: Float64Array, n: number): Float64Array {
-  const out = new Float64Array(n * n);
+  return matMulInto(a, b, n, new Float64Array(n * n));
+}
+
+/** out = a·b (out must not be a or b); zero entries of a are skipped, as in sparse block matrices. */
+function matMulInto(a: Float64Array, b: Float64Array, n: number, out: Float64Array): Float64Array {
+  out.fill(0);
   for (let i = 0; i < n; i++) {
+    const row = i * n;
     for (let k = 0; k < n; k++) {
-      const aik = a[i * n + k];
+      const aik = a[row + k];
       if (aik === 0) continue;
-      for (let j = 0; j < n; j++) out[i * n + j] += aik * b[k * n + j];
+      const col = k * n;
+      for (let j = 0; j < n; j++) out[row + j] += aik * b[col + j];
     }
   }
   return out;
@@ -24,15 +31,18 @@ export function matMul(a: Float64Array, b: Float64Array, n: number): Float64Arra
 
 /** Solves A·X = B for X (both n×n) by Gaussian elimination with partial pivoting. */
 export function solve(a: Float64Array, b: Float64Array, n: number): Float64Array {
-  const m = Float64Array.from(a);
-  const x = Float64Array.from(b);
+  return solveInPlace(Float64Array.from(a), Float64Array.from(b), n);
+}
+
+/** solve() overwriting a (with its elimination) and b (with the solution X). */
+function solveInPlace(m: Float64Array, x: Float64Array, n: number): Float64Array {
   for (let c = 0; c < n; c++) {
     let p = c;
     for (let r = c + 1; r < n; r++) if (Math.abs(m[r * n + c]) > Math.abs(m[p * n + c])) p = r;
     if (p !== c) {
       for (let j = 0; j < n; j++) {
-        [m[c * n + j], m[p * n + j]] = [m[p * n + j], m[c * n + j]];
-        [x[c * n + j], x[p * n + j]] = [x[p * n + j], x[c * n + j]];
+        const mj = m[c * n + j]; m[c * n + j] = m[p * n + j]; m[p * n + j] = mj;
+        const xj = x[c * n + j]; x[c * n + j] = x[p * n + j]; x[p * n + j] = xj;
       }
     }
     const piv = m[c * n + c];
@@ -75,33 +85,39 @@ export function expm(a: Float64Array, n: number): Float64Array {
   if (!Number.isFinite(norm)) return new Float64Array(n * n).fill(NaN);
   const s = norm > 0.5 ? Math.max(0, Math.ceil(Math.log2(norm / 0.5))) : 0;
   const f = 2 ** -s;
-  const x = a.map((v) => v * f);
+  const size = n * n;
+  const x = new Float64Array(size);
+  for (let i = 0; i < size; i++) x[i] = a[i] * f;
   const q = 6;
   let c = 0.5;
+  // Two buffers take turns holding X^k (and, later, the squares).
   let power: Float64Array = Float64Array.from(x);
+  let spare: Float64Array = new Float64Array(size);
   const den = identity(n);
   // N − D = 2·Σ odd terms; D = Σ (−1)^k c_k X^k.
-  const diff = new Float64Array(n * n);
-  for (let i = 0; i < n * n; i++) {
+  const diff = new Float64Array(size);
+  for (let i = 0; i < size; i++) {
     diff[i] = 2 * c * x[i];
     den[i] -= c * x[i];
   }
   let sign = -1;
   for (let k = 2; k <= q; k++) {
     c = (c * (q - k + 1)) / (k * (2 * q - k + 1));
-    power = matMul(power, x, n);
+    const next = matMulInto(power, x, n, spare);
+    spare = power;
+    power = next;
     sign = -sign;
-    for (let i = 0; i < n * n; i++) {
+    const odd = k % 2 === 1;
+    for (let i = 0; i < size; i++) {
       den[i] += sign * c * power[i];
-      if (k % 2 === 1) diff[i] += 2 * c * power[i];
+      if (odd) diff[i] += 2 * c * power[i];
     }
   }
-  let e: Float64Array = solve(den, diff, n);
+  const e = solveInPlace(den, diff, n);
   for (let k = 0; k < s; k++) {
-    const sq = matMul(e, e, n);
-    for (let i = 0; i < n * n; i++) e[i] = 2 * e[i] + sq[i];
+    const sq = matMulInto(e, e, n, spare);
+    for (let i = 0; i < size; i++) e[i] = 2 * e[i] + sq[i];
   }
-  e = Float64Array.from(e);
   for (let i = 0; i < n; i++) e[i * n + i] += 1;
   return e;
 }
