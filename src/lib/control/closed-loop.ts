@@ -1,18 +1,14 @@
 /**
  * Closed-loop time responses of r → e = r − ym → C → (+ d) → G → y → H → ym with the dead
  * times of G and H taken exactly. Without dead time in the loop the closed loop is rational and
- * simulated exactly. With dead time θ = θG + θH the loop is cut at the delay: the rational part
- * (C·G_R, then H_R) is one state-space system, advanced exactly over each fixed step for an error
- * signal that is the cubic Hermite interpolant of the delayed measurement and its rate (both
- * stored at every node; the step divides θ, so delayed samples are stored ones). The scheme is
- * fourth order in the step. When θ is shorter than a step, the error is taken linear within the
- * step and its one unknown end value is solved for (second order). The output, delayed by θG,
- * is read between nodes by cubic Hermite interpolation (dz/dt is known exactly). The dead time
+ * simulated exactly. With dead time θ = θG + θH the loop is cut at the delay and stepped
+ * (delayed-loop.ts); the output, delayed by θG, is read between the steps' nodes. The dead time
  * is never replaced by a rational approximation.
  */
 import { ModelError, type TransferFunction } from './types';
 import { add, degree, multiply } from './polynomial';
-import { cascade, discretizeCubic, discretizeStates as discretize, toStateSpace } from './state-space';
+import { cascade, toStateSpace } from './state-space';
+import { readDelayed, stepDelayedLoop, type Forcing } from './delayed-loop';
 import { impulseResponse, rampResponse, simulateInput, stepResponse, type TimeResponse } from './simulate';
 import { roots } from './roots';
 import { gridStep, timeGrid } from './time-grid';
@@ -43,6 +39,11 @@ export interface ClosedLoopOptions {
    * scan); the step is kept at or below 0.5/that so closed-loop oscillations are resolved.
    */
   loopBandwidth?: number;
+  /**
+   * Largest pole magnitude (rad/s) of C, G and H when the caller knows it already (e.g. from the
+   * factored loop); otherwise it is found from the blocks' denominators.
+   */
+  fastestRate?: number;
 }
 
 /** Internal step: see ClosedLoopOptions. */
@@ -89,7 +90,7 @@ export interface LoopResponse extends TimeResponse {
 
 /** Unit step response of the closed loop to the setpoint or to a load at the plant input. */
 export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInput = 'setpoint', options: ClosedLoopOptions = {}): TimeResponse {
-  const r = closedLoopResponse(loop, t, input === 'setpoint' ? { setpoint: 'step' } : { load: 'step' }, options);
+  const r = loopResponse(loop, t, input === 'setpoint' ? { setpoint: 'step' } : { load: 'step' }, options, false);
   return { t: r.t, y: r.y };
 }
 
@@ -148,6 +149,11 @@ function sumOf(a: number[], b: number[]): number[] {
 
 /** Closed-loop response to a setpoint and/or load signal (superposed), dead times exact. */
 export function closedLoopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, options: ClosedLoopOptions = {}): LoopResponse {
+  const r = loopResponse(loop, t, drive, options, true);
+  return { t: r.t, y: r.y, rate: r.rate! };
+}
+
+function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, options: ClosedLoopOptions, withRate: boolean): { t: number[]; y: number[]; rate: number[] | null } {
   const theta = loop.plant.delay + loop.sensor.delay;
   const dtOut = gridStep(t);
   if (theta === 0) {
@@ -168,117 +174,23 @@ export function closedLoopResponse(loop: Loop, t: readonly number[], drive: Loop
   const ss = cascade(toStateSpace(p), toStateSpace(hR));
   // Higher orders take fewer steps (each costs n²), so the work stays within the budget.
   const maxSteps = Math.min(options.maxSteps ?? 50000, stepLimit(ss.n));
-  const h = internalStep(span, theta, Math.max(fastestRate(p), fastestRate(hR)), { ...options, maxSteps });
+  const fastest = options.fastestRate ?? Math.max(fastestRate(p), fastestRate(hR));
+  const h = internalStep(span, theta, fastest, { ...options, maxSteps });
   const steps = boundedCount(Math.ceil(span / h - 1e-9), 2 * maxSteps + 2, 'The closed-loop simulation would need too many steps; shorten tFinal.', 'analyses.step.tFinal');
-  const n = ss.n;
-  const [cz, cm] = ss.c;
-  const [dz, dm] = ss.d;
-  // Known forcing by the load: z2 = G_R·d and m2 = H_R·G_R·d (and their rates) on the internal grid.
-  const load = drive.load !== undefined;
-  const zero = new Float64Array(steps + 1);
-  let zF: ArrayLike<number> = zero, zRateF: ArrayLike<number> = zero, mF: ArrayLike<number> = zero, mRateF: ArrayLike<number> = zero;
-  if (load) {
-    const inner = timeGrid(steps * h, steps + 1);
-    const hg = { num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 };
-    const ld = drive.load!;
-    const innerLoad: LoopSignal = typeof ld === 'object' ? { samples: inner.map((x) => sampledAt(ld.samples, 0, dtOut).at(x)) } : ld;
-    const zl = openResponse(gR, inner, innerLoad, h);
-    const ml = openResponse(hg, inner, innerLoad, h);
-    zF = zl.y; zRateF = zl.rate; mF = ml.y; mRateF = ml.rate;
-  }
-  const rAt = (x: number) => rSig.at(t[0] + x);
-  const rSlope = (x: number) => rSig.slope(t[0] + x);
-  const zHist = new Float64Array(steps + 1);
-  const mHist = new Float64Array(steps + 1);
-  // Rates at each node: dz/dt for the Hermite output, dm/dt for the cubic hold of the error.
-  const zRate = new Float64Array(steps + 1);
-  const mRate = new Float64Array(steps + 1);
-  const rowTimesA = (c: Float64Array): { ca: Float64Array; cb: number } => {
-    const ca = new Float64Array(n);
-    let cb = 0;
-    for (let k = 0; k < n; k++) {
-      cb += c[k] * ss.b[k];
-      for (let j = 0; j < n; j++) ca[j] += c[k] * ss.a[k * n + j];
-    }
-    return { ca, cb };
-  };
-  const { ca: czA, cb: czB } = rowTimesA(cz);
-  const { ca: cmA, cb: cmB } = rowTimesA(cm);
-  let x: Float64Array = new Float64Array(n);
-  let xn: Float64Array = new Float64Array(n);
-  const pred = new Float64Array(n);
-  // The step divides θ when θ ≥ h, so the delayed measurement is the stored sample `lag` back.
-  const lag = theta >= h ? Math.round(theta / h) : 0;
-  const cubic = lag > 0 ? discretizeCubic(ss, h) : null;
-  const foh = lag > 0 ? null : discretize(ss, h);
-  const phi = cubic ? cubic.phi : foh!.phi;
-  let cmg1 = dm;
-  if (foh) for (let k = 0; k < n; k++) cmg1 += cm[k] * foh.g1[k];
-  let e = rAt(0);
-  let eRate = rSlope(0.5 * h);
-  for (let i = 0; i <= steps; i++) {
-    let zi = dz * e + zF[i], mi = dm * e + mF[i];
-    let zr = czB * e + dz * eRate + zRateF[i], mr = cmB * e + dm * eRate + mRateF[i];
-    for (let k = 0; k < n; k++) {
-      const xk = x[k];
-      zi += cz[k] * xk;
-      mi += cm[k] * xk;
-      zr += czA[k] * xk;
-      mr += cmA[k] * xk;
-    }
-    zHist[i] = zi;
-    mHist[i] = mi;
-    zRate[i] = zr;
-    mRate[i] = mr;
-    if (i === steps) break;
-    for (let a = 0; a < n; a++) {
-      const row = a * n;
-      let s = 0;
-      for (let b = 0; b < n; b++) s += phi[row + b] * x[b];
-      pred[a] = s;
-    }
-    if (cubic) {
-      // e over the step is the cubic Hermite interpolant of the delayed measurement; before the
-      // delayed start (j ≤ 0 from the left) the measurement is still at rest.
-      const j = i + 1 - lag;
-      const rEnd = rAt((i + 1) * h);
-      const slope = rSlope((i + 0.5) * h);
-      const eEnd = j > 0 ? rEnd - mHist[j] : rEnd;
-      const dEnd = (j > 0 ? slope - mRate[j] : slope) * h;
-      const dStart = eRate * h;
-      for (let a = 0; a < n; a++) xn[a] = pred[a] + cubic.ge0[a] * e + cubic.ge1[a] * eEnd + cubic.gd0[a] * dStart + cubic.gd1[a] * dEnd;
-      const nextSlope = rSlope((i + 1.5) * h);
-      e = j >= 0 ? rEnd - mHist[j] : rEnd;
-      eRate = j >= 0 ? nextSlope - mRate[j] : nextSlope;
-    } else {
-      // θ < h: m at (i+1)h − θ lies inside this step and depends on e(i+1) itself (linear, solved directly).
-      const g = foh!;
-      const alpha = 1 - theta / h;
-      let beta = mF[i + 1];
-      for (let a = 0; a < n; a++) pred[a] += g.g0[a] * e;
-      for (let k = 0; k < n; k++) beta += cm[k] * pred[k];
-      const eNext = (rAt((i + 1) * h) - (1 - alpha) * mi - alpha * beta) / (1 + alpha * cmg1);
-      for (let a = 0; a < n; a++) xn[a] = pred[a] + g.g1[a] * eNext;
-      eRate = (eNext - e) / h;
-      e = eNext;
-    }
-    const swap = x;
-    x = xn;
-    xn = swap;
-  }
-  const y = new Array<number>(t.length);
-  const rate = new Array<number>(t.length);
-  for (let k = 0; k < t.length; k++) {
-    const tau = t[k] - t[0] - loop.plant.delay;
-    if (tau < -1e-9 * h) { y[k] = 0; rate[k] = 0; continue; }
-    const f = Math.max(0, tau / h);
-    const j = Math.floor(f);
-    if (j >= steps) { y[k] = zHist[steps]; rate[k] = zRate[steps]; continue; }
-    const u = f - j;
-    const u2 = u * u, u3 = u2 * u;
-    y[k] = (2 * u3 - 3 * u2 + 1) * zHist[j] + (u3 - 2 * u2 + u) * h * zRate[j] + (3 * u2 - 2 * u3) * zHist[j + 1] + (u3 - u2) * h * zRate[j + 1];
-    // Derivative of the Hermite cubic.
-    rate[k] = ((6 * u2 - 6 * u) * (zHist[j] - zHist[j + 1])) / h + (3 * u2 - 4 * u + 1) * zRate[j] + (3 * u2 - 2 * u) * zRate[j + 1];
-  }
-  return { t: [...t], y, rate };
+  const forcing = drive.load === undefined ? null : loadForcing(loop, drive.load, steps, h, dtOut);
+  const reference = { at: (x: number) => rSig.at(t[0] + x), slope: (x: number) => rSig.slope(t[0] + x) };
+  const history = stepDelayedLoop(ss, h, steps, theta, reference, forcing);
+  const out = readDelayed(history, t, loop.plant.delay, withRate);
+  return { t: [...t], y: out.y, rate: out.rate };
+}
+
+/** Known forcing by the load: z = G_R·d and m = H_R·G_R·d (and their rates) on the internal grid. */
+function loadForcing(loop: Loop, load: LoopSignal, steps: number, h: number, dtOut: number): Forcing {
+  const gR = { num: loop.plant.num, den: loop.plant.den, delay: 0 };
+  const hg = { num: multiply(loop.sensor.num, gR.num), den: multiply(loop.sensor.den, gR.den), delay: 0 };
+  const inner = timeGrid(steps * h, steps + 1);
+  const innerLoad: LoopSignal = typeof load === 'object' ? { samples: inner.map((x) => sampledAt(load.samples, 0, dtOut).at(x)) } : load;
+  const zl = openResponse(gR, inner, innerLoad, h);
+  const ml = openResponse(hg, inner, innerLoad, h);
+  return { z: Float64Array.from(zl.y), zRate: Float64Array.from(zl.rate), m: Float64Array.from(ml.y), mRate: Float64Array.from(ml.rate) };
 }
