@@ -8,9 +8,9 @@ import { pidToTransferFunction } from './pid';
 import { chain } from './connect';
 import { factor, autoGrid, frequencyResponse, timeScales, type FactoredModel, type FrequencyResponse } from './frequency';
 import { margins } from './margins';
-import { loopScan } from './scan-grid';
+import { loopScan, seedScan } from './scan-grid';
 import { closedLoopStable, characteristicPolynomial, openPathStable } from './stability';
-import { sortRoots, roots } from './roots';
+import { cabs, sortRoots, roots } from './roots';
 import { stepResponse } from './simulate';
 import { closedLoopStep, closedLoopTransferFunction, type LoopInput } from './closed-loop';
 import { degree } from './polynomial';
@@ -100,7 +100,15 @@ function finalValueOf(s: Setup, input: LoopInput, stable: boolean): number | nul
 
 function simulateStep(s: Setup, t: number[], input: LoopInput): number[] {
   if (!s.controller) return stepResponse(chain([s.plant, s.sensor]), t).y;
-  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input, { loopBandwidth: loopBandwidth(s.loop) }).y;
+  const options = { loopBandwidth: loopBandwidth(s.loop), fastestRate: fastestPole(s.loop) };
+  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input, options).y;
+}
+
+/** Largest pole magnitude of the loop's blocks (rad/s), from the roots already found. */
+function fastestPole(m: FactoredModel): number {
+  let best = 0;
+  for (let i = 0; i < m.pr.length; i++) best = Math.max(best, cabs(m.pr[i], m.pi[i]));
+  return best;
 }
 
 /** Highest scanned frequency where |L| ≥ ½ (rad/s); 0 when there is none. */
@@ -158,13 +166,16 @@ export function analyze(req: AnalyzeRequest): AnalyzeResponse {
   const s = setup(req);
   const a = checkAnalyses(req.analyses);
   const out: AnalyzeResponse = {};
+  let frequency: FrequencyResponse | null = null;
+  if (a.frequency) {
+    frequency = frequencyResponse(s.loop, a.frequency.w ?? autoGrid(s.loop, { points: a.frequency.points }));
+    // A margin or stability scan, if one follows, reuses these values where the grid is dense enough.
+    seedScan(s.loop, frequency);
+  }
   const needStable = a.step !== null || a.poles;
   const stable = needStable ? (s.controller ? closedLoopStable(s.loopBlocks, s.loop) : openPathStable(s.loop)) : false;
   if (a.step) out.step = runStep(s, a.step, stable);
-  if (a.frequency) {
-    const w = a.frequency.w ?? autoGrid(s.loop, { points: a.frequency.points });
-    out.frequency = frequencyResponse(s.loop, w);
-  }
+  if (frequency) out.frequency = frequency;
   if (a.margins) out.margins = margins(s.loop);
   if (a.poles) {
     out.poles = sortRoots(s.loop.poles.map((p) => ({ ...p })));

@@ -8,7 +8,7 @@
  * function. With dead time the phase crosses −180° endlessly; at most maxPhaseCrossovers are listed.
  */
 import type { Margins } from './types';
-import { type FactoredModel, magnitudeAt, phaseAt, pointAt } from './frequency';
+import { type FactoredModel, magnitudeAt, phaseAt, pointInto } from './frequency';
 import { bisectLog, loopScan, maximizeLog } from './scan-grid';
 
 const DEG = Math.PI / 180;
@@ -23,13 +23,16 @@ export function reduceDeg(x: number): number {
   return x - 360 * Math.ceil((x - 180) / 360);
 }
 
-function sensitivity(m: FactoredModel, w: number): { s: number; t: number } {
-  const p = pointAt(m, w);
+const point = { mag: 0, phaseDeg: 0 };
+
+/** |S| = 1/|1 + L| (key 's') or |T| = |L|/|1 + L| (key 't') at w. */
+function sensitivity(m: FactoredModel, w: number, key: 's' | 't'): number {
+  const p = pointInto(m, w, point);
   const mag = p.mag;
   const ph = p.phaseDeg * DEG;
   const re = 1 + mag * Math.cos(ph), im = mag * Math.sin(ph);
   const d = Math.sqrt(re * re + im * im);
-  return { s: 1 / d, t: mag / d };
+  return key === 's' ? 1 / d : mag / d;
 }
 
 /** L(0) from the factored form; Infinity for a pole at the origin. */
@@ -110,7 +113,7 @@ function peakSensitivities(m: FactoredModel, w: number[], sens: Float64Array, co
   }
   const refine = (i: number, key: 's' | 't', best: number) => {
     if (i === 0 || i === w.length - 1) return best;
-    return Math.max(best, maximizeLog((x) => sensitivity(m, x)[key], w[i - 1], w[i + 1]).value);
+    return Math.max(best, maximizeLog((x) => sensitivity(m, x, key), w[i - 1], w[i + 1]).value);
   };
   ms = refine(is, 's', ms);
   mt = refine(it, 't', mt);
@@ -131,7 +134,7 @@ function bandwidth(m: FactoredModel, w: number[], comp: Float64Array): number | 
   const t0 = Number.isFinite(l0) ? Math.abs(l0 / (1 + l0)) : 1;
   if (!(t0 > 0) || !Number.isFinite(t0)) return null;
   const target = t0 / Math.SQRT2;
-  const f = (x: number) => sensitivity(m, x).t - target;
+  const f = (x: number) => sensitivity(m, x, 't') - target;
   let prev = comp[0] - target;
   if (prev < 0) return null;
   for (let i = 1; i < w.length; i++) {

@@ -2,7 +2,8 @@
  * The dense frequency grid that margin and stability searches start from: logarithmic over the
  * model's time scales widened by three decades each side, plus the frequencies of every root
  * (so lightly damped resonances are not stepped over). Crossings are then refined on the exact
- * function, so results do not depend on this grid.
+ * function, so results do not depend on this grid; a denser grid of values already computed
+ * (the requested frequency response) may stand in for part of it.
  */
 import type { FactoredModel } from './frequency';
 import { magnitudeAt, pointInto, timeScales } from './frequency';
@@ -14,7 +15,22 @@ const MAX_SCAN_POINTS = 20_000;
 
 const PER_DECADE = 16;
 
-export function scanGrid(m: FactoredModel): number[] {
+/** L(jw) already computed on an ascending grid (e.g. the requested frequency response). */
+export interface KnownValues {
+  w: readonly number[];
+  mag: readonly number[];
+  phaseDeg: readonly number[];
+}
+
+/** Largest ratio between neighbouring scan points. */
+const MAX_RATIO = 10 ** (1 / PER_DECADE);
+
+/**
+ * The scan grid, with the points of `known` standing in for the logarithmic grid over their
+ * range when they are at least as dense (so they need not be evaluated again); the root
+ * frequencies are always included. `fromKnown[i]` is the index into known of point i, or −1.
+ */
+function scanPoints(m: FactoredModel, known: KnownValues | null): { w: number[]; fromKnown: number[] } {
   const scales = timeScales(m);
   const lo = Math.min(...scales) / 1e3;
   let hi = Math.max(...scales) * 1e3;
@@ -24,22 +40,65 @@ export function scanGrid(m: FactoredModel): number[] {
   }
   const a = Math.log10(lo), b = Math.log10(hi);
   const n = boundedCount(Math.ceil((b - a) * PER_DECADE) + 1, MAX_SCAN_POINTS, 'The loop\'s time scales span too many decades to scan; check the model for extreme coefficients.', 'plant');
-  const w: number[] = [];
-  for (let i = 0; i < n; i++) w.push(10 ** (a + ((b - a) * i) / (n - 1)));
-  for (const r of [...m.poles, ...m.zeros]) {
-    const mag = cabs(r.re, r.im);
-    if (mag === 0) continue;
-    w.push(mag);
-    const im = Math.abs(r.im);
-    if (im > 0 && Math.abs(r.re) < 0.5 * im) {
-      for (const k of [-2, -1, -0.5, 0.5, 1, 2]) {
-        const x = im + k * Math.abs(r.re);
-        if (x > 0) w.push(x);
+  const seed = known && denseEnough(known.w) ? known : null;
+  const from = seed ? seed.w[0] : Infinity, to = seed ? seed.w[seed.w.length - 1] : -Infinity;
+  // Three sorted sources merged: the logarithmic grid (outside the seed's range), the seed, the roots.
+  const grid: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const x = 10 ** (a + ((b - a) * i) / (n - 1));
+    if (x < from || x > to) grid.push(x);
+  }
+  const roots = rootFrequencies(m);
+  const w: number[] = [], fromKnown: number[] = [];
+  let g = 0, k = 0, r = 0;
+  const seedLength = seed ? seed.w.length : 0;
+  while (g < grid.length || k < seedLength || r < roots.length) {
+    const xg = g < grid.length ? grid[g] : Infinity;
+    const xk = k < seedLength ? seed!.w[k] : Infinity;
+    const xr = r < roots.length ? roots[r] : Infinity;
+    let x: number, index = -1;
+    if (xr <= xg && xr <= xk) x = roots[r++];
+    else if (xk <= xg) { x = xk; index = k++; }
+    else x = grid[g++];
+    if (x >= lo && x <= hi) { w.push(x); fromKnown.push(index); }
+  }
+  return { w, fromKnown };
+}
+
+/** Ascending, positive, finite and at least PER_DECADE points per decade throughout. */
+function denseEnough(w: readonly number[]): boolean {
+  if (w.length < 2 || !(w[0] > 0)) return false;
+  for (let i = 1; i < w.length; i++) if (!(w[i] > w[i - 1] && w[i] <= w[i - 1] * MAX_RATIO && Number.isFinite(w[i]))) return false;
+  return true;
+}
+
+/** The scan grid of m (see the module comment). */
+export function scanGrid(m: FactoredModel): number[] {
+  return scanPoints(m, null).w;
+}
+
+/** Every root's frequency, and the flanks of lightly damped pairs, sorted. */
+function rootFrequencies(m: FactoredModel): number[] {
+  const out: number[] = [];
+  const add = (re: number, im: number) => {
+    const mag = cabs(re, im);
+    if (mag === 0) return;
+    out.push(mag);
+    const y = Math.abs(im);
+    if (y > 0 && Math.abs(re) < 0.5 * y) {
+      for (const k of FLANKS) {
+        const x = y + k * Math.abs(re);
+        if (x > 0) out.push(x);
       }
     }
-  }
-  return w.filter((x) => x >= lo && x <= hi).sort((p, q) => p - q);
+  };
+  for (let i = 0; i < m.pr.length; i++) add(m.pr[i], m.pi[i]);
+  for (let i = 0; i < m.zr.length; i++) add(m.zr[i], m.zi[i]);
+  return out.sort((p, q) => p - q);
 }
+
+/** Offsets, in units of |Re|, around a lightly damped pair's frequency (its resonance peak). */
+const FLANKS = [-2, -1, -0.5, 0.5, 1, 2];
 
 /** L(jw) on the scan grid, computed once per model and shared by margins and stability. */
 export interface LoopScan {
@@ -49,15 +108,33 @@ export interface LoopScan {
 }
 
 const scans = new WeakMap<FactoredModel, LoopScan>();
+const seeds = new WeakMap<FactoredModel, KnownValues>();
 
+/**
+ * Offers values of L already computed (e.g. the requested frequency response of the same model)
+ * to the model's scan, should one be needed later; they are used where dense enough.
+ */
+export function seedScan(m: FactoredModel, known: KnownValues): void {
+  if (!scans.has(m)) seeds.set(m, known);
+}
+
+/** The model's scan, computed on first use (from the seeded values where there are any). */
 export function loopScan(m: FactoredModel): LoopScan {
   const cached = scans.get(m);
   if (cached) return cached;
-  const w = scanGrid(m);
+  const known = seeds.get(m) ?? null;
+  seeds.delete(m);
+  const { w, fromKnown } = scanPoints(m, known);
   const mag = new Float64Array(w.length);
   const phaseDeg = new Float64Array(w.length);
   const p = { mag: 0, phaseDeg: 0 };
   for (let i = 0; i < w.length; i++) {
+    const k = fromKnown[i];
+    if (k >= 0) {
+      mag[i] = known!.mag[k];
+      phaseDeg[i] = known!.phaseDeg[k];
+      continue;
+    }
     pointInto(m, w[i], p);
     mag[i] = p.mag;
     phaseDeg[i] = p.phaseDeg;
@@ -104,15 +181,55 @@ export function bisectLog(f: (w: number) => number, a: number, b: number, fa: nu
   return Math.exp(xb);
 }
 
-/** Golden-section search for the maximum of f in log w on [a, b]. */
+/**
+ * Maximum of f in log w on [a, b] by Brent's method (Brent 1973, ch. 5, "localmin"): golden
+ * sections where parabolic interpolation is unsafe, parabolas near the peak, so a smooth peak
+ * takes about a dozen evaluations (written here: one small routine, no optimizer bundle needed).
+ */
 export function maximizeLog(f: (w: number) => number, a: number, b: number): { w: number; value: number } {
-  const g = (Math.sqrt(5) - 1) / 2;
-  let la = Math.log(a), lb = Math.log(b);
-  let l1 = lb - g * (lb - la), l2 = la + g * (lb - la);
-  let f1 = f(Math.exp(l1)), f2 = f(Math.exp(l2));
-  for (let i = 0; i < 60 && lb - la > 1e-7; i++) {
-    if (f1 < f2) { la = l1; l1 = l2; f1 = f2; l2 = la + g * (lb - la); f2 = f(Math.exp(l2)); }
-    else { lb = l2; l2 = l1; f2 = f1; l1 = lb - g * (lb - la); f1 = f(Math.exp(l1)); }
+  const g = (3 - Math.sqrt(5)) / 2;
+  let lo = Math.log(a), hi = Math.log(b);
+  let x = lo + g * (hi - lo), v = x, u = x;
+  let fx = -f(Math.exp(x)), fv = fx, fu = fx;
+  let wPt = x, fw = fx;
+  let d = 0, e = 0;
+  for (let i = 0; i < 100; i++) {
+    const mid = 0.5 * (lo + hi);
+    const tol = 1e-8 * Math.abs(x) + 1e-10;
+    if (Math.abs(x - mid) <= 2 * tol - 0.5 * (hi - lo)) break;
+    let golden = true;
+    if (Math.abs(e) > tol) {
+      // Parabola through x, w and v.
+      let r = (x - wPt) * (fx - fv);
+      let q = (x - v) * (fx - fw);
+      let p = (x - v) * q - (x - wPt) * r;
+      q = 2 * (q - r);
+      if (q > 0) p = -p; else q = -q;
+      const eOld = e;
+      e = d;
+      if (Math.abs(p) < Math.abs(0.5 * q * eOld) && p > q * (lo - x) && p < q * (hi - x)) {
+        d = p / q;
+        u = x + d;
+        if (u - lo < 2 * tol || hi - u < 2 * tol) d = x < mid ? tol : -tol;
+        golden = false;
+      }
+    }
+    if (golden) {
+      e = (x < mid ? hi : lo) - x;
+      d = g * e;
+    }
+    u = x + (Math.abs(d) >= tol ? d : d > 0 ? tol : -tol);
+    fu = -f(Math.exp(u));
+    if (fu <= fx) {
+      if (u < x) hi = x; else lo = x;
+      v = wPt; fv = fw;
+      wPt = x; fw = fx;
+      x = u; fx = fu;
+    } else {
+      if (u < x) lo = u; else hi = u;
+      if (fu <= fw || wPt === x) { v = wPt; fv = fw; wPt = u; fw = fu; }
+      else if (fu <= fv || v === x || v === wPt) { v = u; fv = fu; }
+    }
   }
-  return f1 > f2 ? { w: Math.exp(l1), value: f1 } : { w: Math.exp(l2), value: f2 };
+  return { w: Math.exp(x), value: -fx };
 }
