@@ -40,15 +40,20 @@ function branchArg(s: Sample, outside: boolean): number {
   return Math.atan2(s.mag * si, 1 + s.mag * c);
 }
 
+/** |1 + L| exactly where it could be small (|L| within 1e-6 of 1); elsewhere ||L| − 1|, a lower bound. */
 function distance(s: Sample): number {
+  const gap = Math.abs(s.mag - 1);
+  if (gap > NEAR_ONE) return gap;
   const re = 1 + s.mag * Math.cos(s.phi), im = s.mag * Math.sin(s.phi);
   return Math.sqrt(re * re + im * im);
 }
 
+const NEAR_ONE = 1e-6;
+
 export interface Winding {
   /** Change of arg(1 + L) from a to b, rad. */
   delta: number;
-  /** Least |1 + L| met (at the evaluated points and gain crossovers). */
+  /** Least |1 + L| met (at the evaluated points and gain crossovers); exact when below 1e-6. */
   closest: number;
 }
 
@@ -59,13 +64,16 @@ export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopS
   // total phase would cancel all digits when w·θ is large.
   const rationalPart: FactoredModel = { ...m, delay: 0 };
   let closest = Infinity;
-  const sample = (w: number, known?: { mag: number; phaseDeg: number }): Sample => {
+  const sample = (w: number): Sample => {
     budget.spend(1);
-    // Scan values carry the delay; taking it back out is exact enough while w·θ is moderate.
-    const reuse = known !== undefined && w * m.delay < REUSE_TURNS;
-    const p = reuse ? known : pointInto(rationalPart, w, point);
-    const rational = (p.phaseDeg * Math.PI) / 180 + (reuse ? w * m.delay : 0);
-    const s = { w, mag: p.mag, rational, phi: rational - w * m.delay };
+    pointInto(rationalPart, w, point);
+    return known(w, point.mag, (point.phaseDeg * Math.PI) / 180);
+  };
+  // Scan values carry the delay; taking it back out is exact enough while w·θ is moderate.
+  const fromScan = (w: number, mag: number, phaseDeg: number): Sample =>
+    w * m.delay < REUSE_TURNS ? known(w, mag, (phaseDeg * Math.PI) / 180 + w * m.delay) : sample(w);
+  const known = (w: number, mag: number, rational: number): Sample => {
+    const s = { w, mag, rational, phi: rational - w * m.delay };
     closest = Math.min(closest, distance(s));
     return s;
   };
@@ -84,37 +92,52 @@ export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopS
     const c = sample(bisectLog(logMagAt, p.w, q.w, Math.log(p.mag)));
     return branchArg(c, pOut) - branchArg(p, pOut) + branchArg(q, qOut) - branchArg(c, qOut);
   };
-  const grid = gridBetween(a, b, scan);
-  let prev = sample(grid[0].w, grid[0].known);
+  // Between neighbours on the same side of |L| = 1 that need no refinement the change is
+  // branchArg(q) − branchArg(p): along a run of them it telescopes to its two ends.
   let delta = 0;
-  for (let i = 1; i < grid.length; i++) {
-    const next = sample(grid[i].w, grid[i].known);
-    delta += turn(prev, next, 0);
+  let prev: Sample | null = null;
+  let runStart: Sample | null = null;
+  const visit = (next: Sample) => {
+    if (prev === null) { prev = runStart = next; return; }
+    const simple = (prev.mag > 1) === (next.mag > 1) && Math.abs(next.rational - prev.rational) <= MAX_RATIONAL_TURN;
+    if (!simple) {
+      if (runStart !== prev) delta += branchArg(prev, prev.mag > 1) - branchArg(runStart!, prev.mag > 1);
+      delta += turn(prev, next, 0);
+      runStart = next;
+    }
     prev = next;
-  }
+  };
+  forEachGridPoint(a, b, scan, (w, i) => visit(i < 0 ? sample(w) : fromScan(w, scan!.mag[i], scan!.phaseDeg[i])));
+  const last = prev as Sample | null;
+  if (last && runStart && runStart !== last) delta += branchArg(last, last.mag > 1) - branchArg(runStart, last.mag > 1);
   return { delta, closest };
 }
 
-interface GridPoint {
-  w: number;
-  /** L(jw) from the shared scan, when the point is one of its. */
-  known?: { mag: number; phaseDeg: number };
-}
-
-/** a, the scan's points inside (a, b), a logarithmic fill where the scan does not reach, b. */
-function gridBetween(a: number, b: number, scan: LoopScan | null): GridPoint[] {
-  const inside: GridPoint[] = [];
+/**
+ * Calls visit for a, the scan's points inside (a, b) (with their index), a logarithmic fill
+ * where the scan does not reach (index −1), and b, in ascending order.
+ */
+function forEachGridPoint(a: number, b: number, scan: LoopScan | null, visit: (w: number, index: number) => void): void {
+  let first = -1, last = -2;
   if (scan) {
     for (let i = 0; i < scan.w.length; i++) {
-      const w = scan.w[i];
-      if (w > a && w < b) inside.push({ w, known: { mag: scan.mag[i], phaseDeg: scan.phaseDeg[i] } });
+      if (scan.w[i] <= a) continue;
+      if (scan.w[i] >= b) break;
+      if (first < 0) first = i;
+      last = i;
     }
   }
-  const fill = (from: number, to: number): GridPoint[] => {
-    if (!(to > from)) return [];
+  const fill = (from: number, to: number) => {
+    if (!(to > from)) return;
     const n = Math.ceil(Math.log10(to / from) * PER_DECADE);
-    return Array.from({ length: Math.max(0, n - 1) }, (_, i) => ({ w: from * (to / from) ** ((i + 1) / n) }));
+    for (let i = 1; i < n; i++) visit(from * (to / from) ** (i / n), -1);
   };
-  if (inside.length === 0) return [{ w: a }, ...fill(a, b), { w: b }];
-  return [{ w: a }, ...fill(a, inside[0].w), ...inside, ...fill(inside[inside.length - 1].w, b), { w: b }];
+  visit(a, -1);
+  if (first < 0) fill(a, b);
+  else {
+    fill(a, scan!.w[first]);
+    for (let i = first; i <= last; i++) visit(scan!.w[i], i);
+    fill(scan!.w[last], b);
+  }
+  visit(b, -1);
 }
