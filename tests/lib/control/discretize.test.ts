@@ -115,6 +115,8 @@ describe('discretize (properties)', () => {
         const tf = build(k, taus);
         const g = discretize({ tf, ts: h, method });
         const condition = sum(g.den.map(Math.abs)) / Math.abs(sum(g.den));
+        // Σden rounding to exactly 0 (five lags near 200 s at ts = 0.01 s) leaves no digits of G(1) to check.
+        fc.pre(Number.isFinite(condition));
         expect(Math.abs(sum(g.num) / sum(g.den) / k - 1)).toBeLessThan(1e-12 * condition);
       }),
       { numRuns: 150 },
