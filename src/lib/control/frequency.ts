@@ -306,6 +306,7 @@ export function autoGrid(m: FactoredModel, options: GridOptions = {}): number[] 
   const hi = Math.log10(Math.max(...scales)) + (options.decadesAbove ?? 2);
   const n = Math.max(2, options.points ?? 200);
   const w = new Array<number>(n);
-  for (let i = 0; i < n; i++) w[i] = 10 ** (lo + ((hi - lo) * i) / (n - 1));
+  // e^(x·ln 10) rather than 10^x: Math.pow costs several times more in V8.
+  for (let i = 0; i < n; i++) w[i] = Math.exp(Math.LN10 * (lo + ((hi - lo) * i) / (n - 1)));
   return w;
 }

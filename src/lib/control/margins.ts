@@ -51,14 +51,12 @@ export function margins(m: FactoredModel, options: MarginOptions = {}): Margins 
   const scan = loopScan(m);
   const w = scan.w;
   const n = w.length;
-  const logMag = new Float64Array(n);
-  const phase = new Float64Array(n);
+  const mags = scan.mag;
+  const phase = scan.phaseDeg;
   const sens = new Float64Array(n);
   const comp = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const mag = scan.mag[i];
-    logMag[i] = Math.log(mag);
-    phase[i] = scan.phaseDeg[i];
+    const mag = mags[i];
     const ph = phase[i] * DEG;
     const cr = 1 + mag * Math.cos(ph), ci = mag * Math.sin(ph);
     const d = Math.sqrt(cr * cr + ci * ci);
@@ -69,8 +67,8 @@ export function margins(m: FactoredModel, options: MarginOptions = {}): Margins 
   const gainCrossovers: number[] = [];
   const phaseCrossovers: number[] = [];
   for (let i = 0; i + 1 < n; i++) {
-    if ((logMag[i] < 0) !== (logMag[i + 1] < 0) && Number.isFinite(logMag[i])) {
-      gainCrossovers.push(logMag[i + 1] === 0 ? w[i + 1] : bisectLog(logMagAt, w[i], w[i + 1], logMag[i]));
+    if ((mags[i] < 1) !== (mags[i + 1] < 1) && mags[i] > 0 && Number.isFinite(mags[i])) {
+      gainCrossovers.push(mags[i + 1] === 1 ? w[i + 1] : bisectLog(logMagAt, w[i], w[i + 1], Math.log(mags[i])));
     }
     if (phaseCrossovers.length >= maxPhase) continue;
     const j0 = Math.floor((phase[i] + 180) / 360);

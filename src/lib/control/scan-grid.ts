@@ -45,7 +45,7 @@ function scanPoints(m: FactoredModel, known: KnownValues | null): { w: number[];
   // Three sorted sources merged: the logarithmic grid (outside the seed's range), the seed, the roots.
   const grid: number[] = [];
   for (let i = 0; i < n; i++) {
-    const x = 10 ** (a + ((b - a) * i) / (n - 1));
+    const x = Math.exp(Math.LN10 * (a + ((b - a) * i) / (n - 1)));
     if (x < from || x > to) grid.push(x);
   }
   const roots = rootFrequencies(m);
