@@ -91,7 +91,7 @@ export interface LoopResponse extends TimeResponse {
 /** Unit step response of the closed loop to the setpoint or to a load at the plant input. */
 export function closedLoopStep(loop: Loop, t: readonly number[], input: LoopInput = 'setpoint', options: ClosedLoopOptions = {}): TimeResponse {
   const r = loopResponse(loop, t, input === 'setpoint' ? { setpoint: 'step' } : { load: 'step' }, options, false);
-  return { t: r.t, y: r.y };
+  return { t: [...t], y: r.y };
 }
 
 /** Impulse response (regular part) of the closed loop: the rate of its step response. */
@@ -150,16 +150,16 @@ function sumOf(a: number[], b: number[]): number[] {
 /** Closed-loop response to a setpoint and/or load signal (superposed), dead times exact. */
 export function closedLoopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, options: ClosedLoopOptions = {}): LoopResponse {
   const r = loopResponse(loop, t, drive, options, true);
-  return { t: r.t, y: r.y, rate: r.rate! };
+  return { t: [...t], y: r.y, rate: r.rate! };
 }
 
-function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, options: ClosedLoopOptions, withRate: boolean): { t: number[]; y: number[]; rate: number[] | null } {
+function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, options: ClosedLoopOptions, withRate: boolean): { y: number[]; rate: number[] | null } {
   const theta = loop.plant.delay + loop.sensor.delay;
   const dtOut = gridStep(t);
   if (theta === 0) {
     const sp = openResponse(closedLoopTransferFunction(loop, 'setpoint'), t, drive.setpoint, dtOut);
     const ld = openResponse(closedLoopTransferFunction(loop, 'load'), t, drive.load, dtOut);
-    return { t: [...t], y: sumOf(sp.y, ld.y), rate: sumOf(sp.rate, ld.rate) };
+    return { y: sumOf(sp.y, ld.y), rate: sumOf(sp.rate, ld.rate) };
   }
   const rSig = signalFunctions(drive.setpoint, t, dtOut, 'setpoint');
   signalFunctions(drive.load, t, dtOut, 'load');
@@ -171,7 +171,8 @@ function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, option
   if (degree(p.num) > degree(p.den)) {
     throw new ModelError('With dead time in the loop, controller times plant must be proper; add a derivative filter.', 'invalid_model', 'controller');
   }
-  const ss = cascade(toStateSpace(p), toStateSpace(hR));
+  const sensorStates = toStateSpace(hR);
+  const ss = cascade(toStateSpace(p), sensorStates);
   // Higher orders take fewer steps (each costs n²), so the work stays within the budget.
   const maxSteps = Math.min(options.maxSteps ?? 50000, stepLimit(ss.n));
   const fastest = options.fastestRate ?? Math.max(fastestRate(p), fastestRate(hR));
@@ -179,9 +180,8 @@ function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, option
   const steps = boundedCount(Math.ceil(span / h - 1e-9), 2 * maxSteps + 2, 'The closed-loop simulation would need too many steps; shorten tFinal.', 'analyses.step.tFinal');
   const forcing = drive.load === undefined ? null : loadForcing(loop, drive.load, steps, h, dtOut);
   const reference = { at: (x: number) => rSig.at(t[0] + x), slope: (x: number) => rSig.slope(t[0] + x) };
-  const history = stepDelayedLoop(ss, h, steps, theta, reference, forcing);
-  const out = readDelayed(history, t, loop.plant.delay, withRate);
-  return { t: [...t], y: out.y, rate: out.rate };
+  const history = stepDelayedLoop(ss, h, steps, theta, reference, forcing, sensorStates.n === 0 ? sensorStates.d[0] : null);
+  return readDelayed(history, t, loop.plant.delay, withRate);
 }
 
 /** Known forcing by the load: z = G_R·d and m = H_R·G_R·d (and their rates) on the internal grid. */

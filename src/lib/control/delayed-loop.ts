@@ -32,10 +32,13 @@ export interface LoopHistory {
   steps: number;
 }
 
-/** ss has outputs c[0] = z and c[1] = m; h divides θ when θ ≥ h. */
-export function stepDelayedLoop(ss: StateSpace, h: number, steps: number, theta: number, r: Reference, forcing: Forcing | null): LoopHistory {
+/**
+ * ss has outputs c[0] = z and c[1] = m; h divides θ when θ ≥ h. sensorGain is k when the
+ * sensor's rational part is a constant (m = k·z, so one pair of dot products per step is spared).
+ */
+export function stepDelayedLoop(ss: StateSpace, h: number, steps: number, theta: number, r: Reference, forcing: Forcing | null, sensorGain: number | null): LoopHistory {
   const f = forcing ?? noForcing(steps);
-  return theta >= h ? cubicSteps(ss, h, steps, Math.round(theta / h), r, f) : linearSteps(ss, h, steps, theta, r, f);
+  return theta >= h ? cubicSteps(ss, h, steps, Math.round(theta / h), r, f, sensorGain) : linearSteps(ss, h, steps, theta, r, f);
 }
 
 function noForcing(steps: number): Forcing {
@@ -56,7 +59,7 @@ function rateRow(ss: StateSpace, c: Float64Array): { ca: Float64Array; cb: numbe
 }
 
 /** θ ≥ h: the delayed measurement is the stored sample `lag` steps back. */
-function cubicSteps(ss: StateSpace, h: number, steps: number, lag: number, r: Reference, f: Forcing): LoopHistory {
+function cubicSteps(ss: StateSpace, h: number, steps: number, lag: number, r: Reference, f: Forcing, sensorGain: number | null): LoopHistory {
   const n = ss.n;
   const [cz, cm] = ss.c;
   const [dz, dm] = ss.d;
@@ -69,15 +72,29 @@ function cubicSteps(ss: StateSpace, h: number, steps: number, lag: number, r: Re
   let e = r.at(0);
   let eRate = r.slope(0.5 * h);
   for (let i = 0; ; i++) {
-    let zi = dz * e + f.z[i], mi = dm * e + f.m[i];
-    let zr = czB * e + dz * eRate + f.zRate[i], mr = cmB * e + dm * eRate + f.mRate[i];
-    for (let k = 0; k < n; k++) {
-      const xk = x[k];
-      zi += cz[k] * xk;
-      mi += cm[k] * xk;
-      zr += czA[k] * xk;
-      mr += cmA[k] * xk;
+    let zi = dz * e, zr = czB * e + dz * eRate;
+    let mi = 0, mr = 0;
+    if (sensorGain === null) {
+      mi = dm * e;
+      mr = cmB * e + dm * eRate;
+      for (let k = 0; k < n; k++) {
+        const xk = x[k];
+        zi += cz[k] * xk;
+        mi += cm[k] * xk;
+        zr += czA[k] * xk;
+        mr += cmA[k] * xk;
+      }
+    } else {
+      for (let k = 0; k < n; k++) {
+        const xk = x[k];
+        zi += cz[k] * xk;
+        zr += czA[k] * xk;
+      }
+      mi = sensorGain * zi;
+      mr = sensorGain * zr;
     }
+    zi += f.z[i]; zr += f.zRate[i];
+    mi += f.m[i]; mr += f.mRate[i];
     z[i] = zi; m[i] = mi; zRate[i] = zr; mRate[i] = mr;
     if (i === steps) break;
     // Before the delayed start (node j ≤ 0 from the left) the measurement is still at rest.

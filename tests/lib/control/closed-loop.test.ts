@@ -44,6 +44,16 @@ describe('closedLoopStep', () => {
     fine.y.forEach((v, i) => expect(Math.abs(v - none.y[i])).toBeLessThan(2e-3));
   });
 
+  it('takes a static sensor gain k exactly: y with H = k equals (y with plant k·G and H = 1)/k (block-diagram algebra)', () => {
+    const c = fixtures.cases[3];
+    const plant = { ...c.plant, delay: c.plant.delay + 0.7 };
+    const k = 1.7;
+    const withGain = closedLoopStep({ controller: c.controller, plant, sensor: { num: [k], den: [1], delay: 0 } }, c.t);
+    const scaled = closedLoopStep({ controller: c.controller, plant: { ...plant, num: plant.num.map((v) => k * v) }, sensor: unity }, c.t);
+    const scale = Math.max(...scaled.y.map(Math.abs));
+    withGain.y.forEach((v, i) => expect(Math.abs(v - scaled.y[i] / k)).toBeLessThan(1e-9 * scale));
+  });
+
   it('refuses an unfiltered derivative on a plant without lag when the loop has dead time', () => {
     const t = timeGrid(10, 11);
     expect(() => closedLoopStep({ controller: { num: [1, 1], den: [1], delay: 0 }, plant: { num: [1], den: [1], delay: 1 }, sensor: unity }, t)).toThrow(/derivative filter/);
