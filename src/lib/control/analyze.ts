@@ -10,7 +10,7 @@ import { factor, autoGrid, frequencyResponse, timeScales, type FactoredModel, ty
 import { margins } from './margins';
 import { loopScan, seedScan } from './scan-grid';
 import { closedLoopStable, characteristicPolynomial, openPathStable } from './stability';
-import { cabs, sortRoots, roots } from './roots';
+import { sortRoots, roots } from './roots';
 import { stepResponse } from './simulate';
 import { closedLoopStep, closedLoopTransferFunction, type LoopInput } from './closed-loop';
 import { degree } from './polynomial';
@@ -100,15 +100,7 @@ function finalValueOf(s: Setup, input: LoopInput, stable: boolean): number | nul
 
 function simulateStep(s: Setup, t: number[], input: LoopInput): number[] {
   if (!s.controller) return stepResponse(chain([s.plant, s.sensor]), t).y;
-  const options = { loopBandwidth: loopBandwidth(s.loop), fastestRate: fastestPole(s.loop) };
-  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input, options).y;
-}
-
-/** Largest pole magnitude of the loop's blocks (rad/s), from the roots already found. */
-function fastestPole(m: FactoredModel): number {
-  let best = 0;
-  for (let i = 0; i < m.pr.length; i++) best = Math.max(best, cabs(m.pr[i], m.pi[i]));
-  return best;
+  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input, { loopBandwidth: loopBandwidth(s.loop) }).y;
 }
 
 /** Highest scanned frequency where |L| ≥ ½ (rad/s); 0 when there is none. */

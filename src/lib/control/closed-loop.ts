@@ -5,7 +5,8 @@
  * (delayed-loop.ts); the output, delayed by θG, is read between the steps' nodes. The dead time
  * is never replaced by a rational approximation.
  */
-import { ModelError, type TransferFunction } from './types';
+import { ModelError, type Complex, type TransferFunction } from './types';
+import { modalForm } from './modal';
 import { add, degree, multiply } from './polynomial';
 import { cascade, toStateSpace } from './state-space';
 import { readDelayed, stepDelayedLoop, type Forcing } from './delayed-loop';
@@ -39,11 +40,6 @@ export interface ClosedLoopOptions {
    * scan); the step is kept at or below 0.5/that so closed-loop oscillations are resolved.
    */
   loopBandwidth?: number;
-  /**
-   * Largest pole magnitude (rad/s) of C, G and H when the caller knows it already (e.g. from the
-   * factored loop); otherwise it is found from the blocks' denominators.
-   */
-  fastestRate?: number;
 }
 
 /** Internal step: see ClosedLoopOptions. */
@@ -59,7 +55,11 @@ function internalStep(span: number, theta: number, fastest: number, options: Clo
 }
 
 function fastestRate(g: TransferFunction): number {
-  return Math.max(0, ...roots(g.den).map((r) => cabs(r.re, r.im)));
+  return largestMagnitude(roots(g.den));
+}
+
+function largestMagnitude(list: readonly Complex[]): number {
+  return Math.max(0, ...list.map((r) => cabs(r.re, r.im)));
 }
 
 /** Rational closed loop Y/R or Y/D of a loop without dead time. */
@@ -172,10 +172,13 @@ function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, option
     throw new ModelError('With dead time in the loop, controller times plant must be proper; add a derivative filter.', 'invalid_model', 'controller');
   }
   const sensorStates = toStateSpace(hR);
-  const ss = cascade(toStateSpace(p), sensorStates);
+  const pPoles = roots(p.den);
+  // With a static sensor and well-separated real poles the loop steps in modal coordinates (n, not n², per step).
+  const forward = (sensorStates.n === 0 ? modalForm(p, pPoles) : null) ?? toStateSpace(p);
+  const ss = cascade(forward, sensorStates);
   // Higher orders take fewer steps (each costs n²), so the work stays within the budget.
   const maxSteps = Math.min(options.maxSteps ?? 50000, stepLimit(ss.n));
-  const fastest = options.fastestRate ?? Math.max(fastestRate(p), fastestRate(hR));
+  const fastest = Math.max(largestMagnitude(pPoles), fastestRate(hR));
   const h = internalStep(span, theta, fastest, { ...options, maxSteps });
   const steps = boundedCount(Math.ceil(span / h - 1e-9), 2 * maxSteps + 2, 'The closed-loop simulation would need too many steps; shorten tFinal.', 'analyses.step.tFinal');
   const forcing = drive.load === undefined ? null : loadForcing(loop, drive.load, steps, h, dtOut);

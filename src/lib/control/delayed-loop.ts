@@ -9,6 +9,7 @@
  * order). The dead time is never replaced by a rational approximation.
  */
 import { discretizeCubic, discretizeStates, type StateSpace } from './state-space';
+import { discretizeModalCubic } from './modal';
 
 /** The setpoint as a function of the time since the start, and its slope. */
 export interface Reference {
@@ -65,7 +66,9 @@ function cubicSteps(ss: StateSpace, h: number, steps: number, lag: number, r: Re
   const [dz, dm] = ss.d;
   const { ca: czA, cb: czB } = rateRow(ss, cz);
   const { ca: cmA, cb: cmB } = rateRow(ss, cm);
-  const { phi, ge0, ge1, gd0, gd1 } = discretizeCubic(ss, h);
+  const diagonal = ss.diagonal === true;
+  // A modal realization's phi is its diagonal alone (length n).
+  const { phi, ge0, ge1, gd0, gd1 } = diagonal ? discretizeModalCubic(ss, h) : discretizeCubic(ss, h);
   const z = new Float64Array(steps + 1), zRate = new Float64Array(steps + 1);
   const m = new Float64Array(steps + 1), mRate = new Float64Array(steps + 1);
   let x = new Float64Array(n), xn = new Float64Array(n);
@@ -104,11 +107,15 @@ function cubicSteps(ss: StateSpace, h: number, steps: number, lag: number, r: Re
     const eEnd = j > 0 ? rEnd - m[j] : rEnd;
     const dEnd = (j > 0 ? slope - mRate[j] : slope) * h;
     const dStart = eRate * h;
-    for (let a = 0; a < n; a++) {
-      const row = a * n;
-      let s = ge0[a] * e + ge1[a] * eEnd + gd0[a] * dStart + gd1[a] * dEnd;
-      for (let b = 0; b < n; b++) s += phi[row + b] * x[b];
-      xn[a] = s;
+    if (diagonal) {
+      for (let a = 0; a < n; a++) xn[a] = phi[a] * x[a] + ge0[a] * e + ge1[a] * eEnd + gd0[a] * dStart + gd1[a] * dEnd;
+    } else {
+      for (let a = 0; a < n; a++) {
+        const row = a * n;
+        let s = ge0[a] * e + ge1[a] * eEnd + gd0[a] * dStart + gd1[a] * dEnd;
+        for (let b = 0; b < n; b++) s += phi[row + b] * x[b];
+        xn[a] = s;
+      }
     }
     const swap = x; x = xn; xn = swap;
     const nextSlope = r.slope((i + 1.5) * h);

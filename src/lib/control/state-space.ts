@@ -14,6 +14,8 @@ export interface StateSpace {
   b: Float64Array;
   c: Float64Array[];
   d: number[];
+  /** A is diagonal (a modal realization, modal.ts): steps may skip its off-diagonal zeros. */
+  diagonal?: boolean;
 }
 
 /** Controllable canonical form of a proper rational G (the delay is ignored here). */
@@ -92,7 +94,8 @@ export function cascade(first: StateSpace, second: StateSpace): StateSpace {
     c2[j] = second.d[0] * first.c[0][j];
   }
   for (let j = 0; j < second.n; j++) c2[n1 + j] = second.c[0][j];
-  return { n, a, b, c: [c1, c2], d: [first.d[0], second.d[0] * first.d[0]] };
+  const diagonal = first.diagonal === true && second.n === 0;
+  return { n, a, b, c: [c1, c2], d: [first.d[0], second.d[0] * first.d[0]], ...(diagonal ? { diagonal } : {}) };
 }
 
 /**
