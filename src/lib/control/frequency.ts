@@ -147,12 +147,23 @@ function hornerAt(m: FactoredModel, w: number): { mag: number; arg: number } {
   let nre = 1, nim = 0, dre = 1, dim = 0, logScale = 0;
   for (let k = 0; k < list.length; k++) {
     const p = list[k];
-    // Horner in jx: (re + j·im)·jx + c = (c − im·x) + j·re·x.
-    let re = 0, im = 0;
-    for (let i = p.length - 1; i >= 0; i--) {
-      const r = p[i] - im * x;
-      im = re * x;
-      re = r;
+    // Σ p[i]·(jx)^i: lags and second-order factors in closed form, longer ones by Horner,
+    // (re + j·im)·jx + c = (c − im·x) + j·re·x.
+    let re: number, im: number;
+    if (p.length === 2) {
+      re = p[0];
+      im = p[1] * x;
+    } else if (p.length === 3) {
+      re = p[0] - p[2] * x * x;
+      im = p[1] * x;
+    } else {
+      re = 0;
+      im = 0;
+      for (let i = p.length - 1; i >= 0; i--) {
+        const r = p[i] - im * x;
+        im = re * x;
+        re = r;
+      }
     }
     if (k < f.numerators) {
       const r = nre * re - nim * im;
