@@ -57,9 +57,8 @@ export function margins(m: FactoredModel, options: MarginOptions = {}): Margins 
   const comp = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const mag = mags[i];
-    const ph = phase[i] * DEG;
-    const cr = 1 + mag * Math.cos(ph), ci = mag * Math.sin(ph);
-    const d = Math.sqrt(cr * cr + ci * ci);
+    // |1 + L|² = 1 + 2|L|cos φ + |L|² (one cosine; the peaks are refined on the exact form below).
+    const d = Math.sqrt(Math.max(0, 1 + mag * (2 * Math.cos(phase[i] * DEG) + mag)));
     sens[i] = 1 / d;
     comp[i] = mag / d;
   }
