@@ -40,6 +40,10 @@ function branchArg(s: Sample, outside: boolean): number {
   return Math.atan2(s.mag * si, 1 + s.mag * c);
 }
 
+function emptySample(): Sample {
+  return { w: NaN, mag: NaN, rational: NaN, phi: NaN };
+}
+
 /** |1 + L| exactly where it could be small (|L| within 1e-6 of 1); elsewhere ||L| − 1|, a lower bound. */
 function distance(s: Sample): number {
   const gap = Math.abs(s.mag - 1);
@@ -64,19 +68,24 @@ export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopS
   // total phase would cancel all digits when w·θ is large.
   const rationalPart: FactoredModel = { ...m, delay: 0 };
   let closest = Infinity;
-  const sample = (w: number): Sample => {
-    budget.spend(1);
-    pointInto(rationalPart, w, point);
-    return known(w, point.mag, (point.phaseDeg * Math.PI) / 180);
-  };
-  // Scan values carry the delay; taking it back out is exact enough while w·θ is moderate.
-  const fromScan = (w: number, mag: number, phaseDeg: number): Sample =>
-    w * m.delay < REUSE_TURNS ? known(w, mag, (phaseDeg * Math.PI) / 180 + w * m.delay) : sample(w);
-  const known = (w: number, mag: number, rational: number): Sample => {
-    const s = { w, mag, rational, phi: rational - w * m.delay };
+  // Fills s with L at w: from the scan's values (mag, phaseDeg) when given, else evaluated.
+  const fill = (s: Sample, w: number, mag?: number, phaseDeg?: number): Sample => {
+    // Scan values carry the delay; taking it back out is exact enough while w·θ is moderate.
+    if (mag !== undefined && phaseDeg !== undefined && w * m.delay < REUSE_TURNS) {
+      s.mag = mag;
+      s.rational = (phaseDeg * Math.PI) / 180 + w * m.delay;
+    } else {
+      budget.spend(1);
+      pointInto(rationalPart, w, point);
+      s.mag = point.mag;
+      s.rational = (point.phaseDeg * Math.PI) / 180;
+    }
+    s.w = w;
+    s.phi = s.rational - w * m.delay;
     closest = Math.min(closest, distance(s));
     return s;
   };
+  const sample = (w: number): Sample => fill(emptySample(), w);
   const logMagAt = (w: number) => {
     budget.spend(1);
     pointInto(rationalPart, w, point);
@@ -93,23 +102,33 @@ export function windingAlong(m: FactoredModel, a: number, b: number, scan: LoopS
     return branchArg(c, pOut) - branchArg(p, pOut) + branchArg(q, qOut) - branchArg(c, qOut);
   };
   // Between neighbours on the same side of |L| = 1 that need no refinement the change is
-  // branchArg(q) − branchArg(p): along a run of them it telescopes to its two ends.
+  // branchArg(q) − branchArg(p): along a run of them it telescopes to its two ends. Two
+  // buffers take turns as the previous and next point, so the walk allocates nothing.
   let delta = 0;
+  const buffers = [emptySample(), emptySample()];
+  const runStart = emptySample();
   let prev: Sample | null = null;
-  let runStart: Sample | null = null;
-  const visit = (next: Sample) => {
-    if (prev === null) { prev = runStart = next; return; }
-    const simple = (prev.mag > 1) === (next.mag > 1) && Math.abs(next.rational - prev.rational) <= MAX_RATIONAL_TURN;
-    if (!simple) {
-      if (runStart !== prev) delta += branchArg(prev, prev.mag > 1) - branchArg(runStart!, prev.mag > 1);
-      delta += turn(prev, next, 0);
-      runStart = next;
+  let runAtPrev = true;
+  const visit = (w: number, index: number) => {
+    const next = fill(prev === buffers[0] ? buffers[1] : buffers[0], w, index < 0 ? undefined : scan!.mag[index], index < 0 ? undefined : scan!.phaseDeg[index]);
+    if (prev !== null) {
+      const simple = (prev.mag > 1) === (next.mag > 1) && Math.abs(next.rational - prev.rational) <= MAX_RATIONAL_TURN;
+      if (simple) {
+        runAtPrev = false;
+      } else {
+        if (!runAtPrev) delta += branchArg(prev, prev.mag > 1) - branchArg(runStart, prev.mag > 1);
+        delta += turn(prev, next, 0);
+        runAtPrev = true;
+        Object.assign(runStart, next);
+      }
+    } else {
+      Object.assign(runStart, next);
     }
     prev = next;
   };
-  forEachGridPoint(a, b, scan, (w, i) => visit(i < 0 ? sample(w) : fromScan(w, scan!.mag[i], scan!.phaseDeg[i])));
+  forEachGridPoint(a, b, scan, visit);
   const last = prev as Sample | null;
-  if (last && runStart && runStart !== last) delta += branchArg(last, last.mag > 1) - branchArg(runStart, last.mag > 1);
+  if (last && !runAtPrev) delta += branchArg(last, last.mag > 1) - branchArg(runStart, last.mag > 1);
   return { delta, closest };
 }
 
