@@ -42,26 +42,34 @@ function scanPoints(m: FactoredModel, known: KnownValues | null): { w: number[];
   const n = boundedCount(Math.ceil((b - a) * PER_DECADE) + 1, MAX_SCAN_POINTS, 'The loop\'s time scales span too many decades to scan; check the model for extreme coefficients.', 'plant');
   const seed = known && denseEnough(known.w) ? known : null;
   const from = seed ? seed.w[0] : Infinity, to = seed ? seed.w[seed.w.length - 1] : -Infinity;
-  // Three sorted sources merged: the logarithmic grid (outside the seed's range), the seed, the roots.
-  const grid: number[] = [];
+  // Three sorted sources merged: the logarithmic grid (outside the seed's range), the seed, the
+  // roots; sized up front, so the merge does not grow arrays as it goes.
+  const grid = new Float64Array(n);
+  let gridLength = 0;
   for (let i = 0; i < n; i++) {
     const x = Math.exp(Math.LN10 * (a + ((b - a) * i) / (n - 1)));
-    if (x < from || x > to) grid.push(x);
+    if (x < from || x > to) grid[gridLength++] = x;
   }
   const roots = rootFrequencies(m);
-  const w: number[] = [], fromKnown: number[] = [];
-  let g = 0, k = 0, r = 0;
   const seedLength = seed ? seed.w.length : 0;
-  while (g < grid.length || k < seedLength || r < roots.length) {
-    const xg = g < grid.length ? grid[g] : Infinity;
+  const capacity = gridLength + seedLength + roots.length;
+  const all = new Float64Array(capacity);
+  const indices = new Int32Array(capacity);
+  let count = 0;
+  let g = 0, k = 0, r = 0;
+  while (g < gridLength || k < seedLength || r < roots.length) {
+    const xg = g < gridLength ? grid[g] : Infinity;
     const xk = k < seedLength ? seed!.w[k] : Infinity;
     const xr = r < roots.length ? roots[r] : Infinity;
     let x: number, index = -1;
     if (xr <= xg && xr <= xk) x = roots[r++];
     else if (xk <= xg) { x = xk; index = k++; }
     else x = grid[g++];
-    if (x >= lo && x <= hi) { w.push(x); fromKnown.push(index); }
+    if (x >= lo && x <= hi) { all[count] = x; indices[count++] = index; }
   }
+  const w = new Array<number>(count);
+  const fromKnown = new Array<number>(count);
+  for (let i = 0; i < count; i++) { w[i] = all[i]; fromKnown[i] = indices[i]; }
   return { w, fromKnown };
 }
 
