@@ -79,42 +79,53 @@ function initialGuesses(c: number[]): Complex[] {
 }
 
 /** Newton ratio p(z)/p'(z) and a backward-error test, evaluated in the reversed polynomial when |z| > 1. */
+/** newtonRatio's answer, overwritten by each call (the iteration calls it thousands of times). */
+const ratio = { re: NaN, im: NaN, small: false };
+
 function newtonRatio(c: number[], z: Complex): { re: number; im: number; small: boolean } {
   const n = c.length - 1;
   const big = z.re * z.re + z.im * z.im > 1;
-  let x = z;
+  let xr = z.re, xi = z.im;
   if (big) {
     const d = z.re * z.re + z.im * z.im;
-    x = { re: z.re / d, im: -z.im / d };
+    xr = z.re / d;
+    xi = -z.im / d;
   }
-  const ax = cabs(x.re, x.im);
+  const ax = cabs(xr, xi);
   let pr = 0, pi = 0, dr = 0, di = 0, bound = 0;
   for (let i = 0; i <= n; i++) {
     const coef = big ? c[n - i] : c[i];
-    const ndr = dr * x.re - di * x.im + pr;
-    di = dr * x.im + di * x.re + pi;
+    const ndr = dr * xr - di * xi + pr;
+    di = dr * xi + di * xr + pi;
     dr = ndr;
-    const npr = pr * x.re - pi * x.im + coef;
-    pi = pr * x.im + pi * x.re;
+    const npr = pr * xr - pi * xi + coef;
+    pi = pr * xi + pi * xr;
     pr = npr;
     bound = bound * ax + Math.abs(coef);
   }
   const small = cabs(pr, pi) <= 4 * EPS * bound;
   if (!big) {
     const d = dr * dr + di * di;
-    if (d === 0) return { re: 0, im: 0, small: true };
-    return { re: (pr * dr + pi * di) / d, im: (pi * dr - pr * di) / d, small };
+    if (d === 0) return answer(0, 0, true);
+    return answer((pr * dr + pi * di) / d, (pi * dr - pr * di) / d, small);
   }
   // p'(z)/p(z) = n/z − x²·q'(x)/q(x), with x = 1/z and q the reversed polynomial.
   const qd = pr * pr + pi * pi;
-  if (qd === 0) return { re: 0, im: 0, small: true };
+  if (qd === 0) return answer(0, 0, true);
   const rr = (dr * pr + di * pi) / qd;
   const ri = (di * pr - dr * pi) / qd;
-  const x2r = x.re * x.re - x.im * x.im;
-  const x2i = 2 * x.re * x.im;
-  const inv = { re: n * x.re - (x2r * rr - x2i * ri), im: n * x.im - (x2r * ri + x2i * rr) };
-  const d = inv.re * inv.re + inv.im * inv.im;
-  return { re: inv.re / d, im: -inv.im / d, small };
+  const x2r = xr * xr - xi * xi;
+  const x2i = 2 * xr * xi;
+  const invRe = n * xr - (x2r * rr - x2i * ri), invIm = n * xi - (x2r * ri + x2i * rr);
+  const d = invRe * invRe + invIm * invIm;
+  return answer(invRe / d, -invIm / d, small);
+}
+
+function answer(re: number, im: number, small: boolean): typeof ratio {
+  ratio.re = re;
+  ratio.im = im;
+  ratio.small = small;
+  return ratio;
 }
 
 function aberth(c: number[]): Complex[] {
@@ -149,7 +160,8 @@ function aberth(c: number[]): Complex[] {
       const dd = denr * denr + deni * deni;
       const wr = (N.re * denr + N.im * deni) / dd;
       const wi = (N.im * denr - N.re * deni) / dd;
-      z[i] = { re: z[i].re - wr, im: z[i].im - wi };
+      z[i].re -= wr;
+      z[i].im -= wi;
       if (cabs(wr, wi) <= EPS * cabs(z[i].re, z[i].im)) done[i] = true;
     }
     if (active === 0) break;
@@ -209,6 +221,12 @@ function mergeClusters(c: number[], list: Complex[]): Complex[] {
   for (let i = 0; i < out.length; i++) {
     if (taken[i]) continue;
     const scale = cabs(out[i].re, out[i].im);
+    // Most roots have no neighbour within 5 %: count before building the cluster lists.
+    let neighbours = 0;
+    for (let j = 0; j < out.length; j++) {
+      if (j !== i && !taken[j] && cabs(out[j].re - out[i].re, out[j].im - out[i].im) <= 0.05 * scale) neighbours++;
+    }
+    if (neighbours === 0) continue;
     const nearIdx = out.map((_, j) => j).filter((j) => !taken[j] && cabs(out[j].re - out[i].re, out[j].im - out[i].im) <= 0.05 * scale);
     const cx = nearIdx.reduce((s, j) => s + out[j].re, 0) / nearIdx.length;
     const cy = nearIdx.reduce((s, j) => s + out[j].im, 0) / nearIdx.length;
