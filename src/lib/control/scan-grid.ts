@@ -46,9 +46,12 @@ function scanPoints(m: FactoredModel, known: KnownValues | null): { w: number[];
   // roots; sized up front, so the merge does not grow arrays as it goes.
   const grid = new Float64Array(n);
   let gridLength = 0;
+  const at = (i: number) => Math.exp(Math.LN10 * (a + ((b - a) * i) / (n - 1)));
   for (let i = 0; i < n; i++) {
-    const x = Math.exp(Math.LN10 * (a + ((b - a) * i) / (n - 1)));
+    const x = at(i);
     if (x < from || x > to) grid[gridLength++] = x;
+    // Skip to the first grid point past the seed (one below it, against rounding).
+    else if (Number.isFinite(to)) i = Math.max(i, Math.floor(((Math.log10(to) - a) / (b - a)) * (n - 1)) - 1);
   }
   const roots = rootFrequencies(m);
   const seedLength = seed ? seed.w.length : 0;
