@@ -100,7 +100,9 @@ function finalValueOf(s: Setup, input: LoopInput, stable: boolean): number | nul
 
 function simulateStep(s: Setup, t: number[], input: LoopInput): number[] {
   if (!s.controller) return stepResponse(chain([s.plant, s.sensor]), t).y;
-  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input, { loopBandwidth: loopBandwidth(s.loop) }).y;
+  // factor() lists the poles block by block, the sensor's last.
+  const forwardPoles = s.loop.poles.slice(0, s.loop.poles.length - (s.sensor.den.length - 1));
+  return closedLoopStep({ controller: s.controller, plant: s.plant, sensor: s.sensor }, t, input, { loopBandwidth: loopBandwidth(s.loop), forwardPoles }).y;
 }
 
 /** Highest scanned frequency where |L| ≥ ½ (rad/s); 0 when there is none. */

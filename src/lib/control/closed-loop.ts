@@ -40,6 +40,12 @@ export interface ClosedLoopOptions {
    * scan); the step is kept at or below 0.5/that so closed-loop oscillations are resolved.
    */
   loopBandwidth?: number;
+  /**
+   * The poles of C·G (the controller's and the plant's blocks' roots) when the caller has them:
+   * found block by block they are more accurate than the roots of the expanded product, and
+   * they are not searched for again.
+   */
+  forwardPoles?: readonly Complex[];
 }
 
 /** Internal step: see ClosedLoopOptions. */
@@ -172,7 +178,7 @@ function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, option
     throw new ModelError('With dead time in the loop, controller times plant must be proper; add a derivative filter.', 'invalid_model', 'controller');
   }
   const sensorStates = toStateSpace(hR);
-  const pPoles = roots(p.den);
+  const pPoles = options.forwardPoles?.length === p.den.length - 1 ? options.forwardPoles : roots(p.den);
   // With a static sensor and well-separated real poles the loop steps in modal coordinates (n, not n², per step).
   const forward = (sensorStates.n === 0 ? modalForm(p, pPoles) : null) ?? toStateSpace(p);
   const ss = cascade(forward, sensorStates);

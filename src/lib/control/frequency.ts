@@ -72,11 +72,12 @@ export function factor(blocks: readonly TransferFunction[]): FactoredModel {
     gain *= b.num[0] / b.den[0];
     delay += b.delay;
     const z = roots(b.num), p = roots(b.den);
-    checkRootSpan([...z, ...p]);
+    checkRootSpan(z, p);
     zeros.push(...z);
     poles.push(...p);
   }
-  if (![...zeros, ...poles].every((r) => Number.isFinite(r.re) && Number.isFinite(r.im)) || !Number.isFinite(gain)) {
+  const finite = (r: Complex) => Number.isFinite(r.re) && Number.isFinite(r.im);
+  if (!zeros.every(finite) || !poles.every(finite) || !Number.isFinite(gain)) {
     throw new ModelError(
       'A pole, zero or gain of the loop lies beyond the range of numbers; the coefficients span too many decades (look for values such as 1e300).',
       'invalid_request',
@@ -93,13 +94,15 @@ const MAX_ROOT_DECADES = 100;
  * derivative filter of 0.08 s) cannot be evaluated in double precision: its coefficients span
  * the whole range of numbers, so roots and closed-loop verdicts would be noise. Refused.
  */
-function checkRootSpan(list: readonly Complex[]): void {
+function checkRootSpan(zeros: readonly Complex[], poles: readonly Complex[]): void {
   let lo = Infinity, hi = 0;
-  for (const r of list) {
-    const a = cabs(r.re, r.im);
-    if (a === 0) continue;
-    lo = Math.min(lo, a);
-    hi = Math.max(hi, a);
+  for (const list of [zeros, poles]) {
+    for (const r of list) {
+      const a = cabs(r.re, r.im);
+      if (a === 0) continue;
+      lo = Math.min(lo, a);
+      hi = Math.max(hi, a);
+    }
   }
   if (hi > 0 && !(hi / lo <= 10 ** MAX_ROOT_DECADES)) {
     throw new ModelError(
@@ -112,12 +115,19 @@ function checkRootSpan(list: readonly Complex[]): void {
 export function fromFactors(gain: number, zeros: Complex[], poles: Complex[], delay: number, blocks: { num: number[]; den: number[] }[] = []): FactoredModel {
   return {
     gain, zeros, poles, delay, blocks,
-    zr: Float64Array.from(zeros, (z) => z.re),
-    zi: Float64Array.from(zeros, (z) => z.im),
-    pr: Float64Array.from(poles, (p) => p.re),
-    pi: Float64Array.from(poles, (p) => p.im),
+    zr: parts(zeros, 're'),
+    zi: parts(zeros, 'im'),
+    pr: parts(poles, 're'),
+    pi: parts(poles, 'im'),
     horner: hornerForm(blocks),
   };
+}
+
+/** One part of every root, as a flat array for the inner loops. */
+function parts(list: readonly Complex[], key: 're' | 'im'): Float64Array {
+  const out = new Float64Array(list.length);
+  for (let i = 0; i < list.length; i++) out[i] = list[i][key];
+  return out;
 }
 
 const hornerOut = { mag: 0, arg: 0 };
@@ -228,8 +238,10 @@ export function magnitudeAt(m: FactoredModel, w: number): number {
 
 /** Continuous phase in degrees (see the module comment). */
 export function phaseAt(m: FactoredModel, w: number): number {
-  return pointAt(m, w).phaseDeg;
+  return pointInto(m, w, phaseScratch).phaseDeg;
 }
+
+const phaseScratch = { mag: 0, phaseDeg: 0 };
 
 /** Magnitude and continuous phase together (one evaluation). */
 export function pointAt(m: FactoredModel, w: number): { mag: number; phaseDeg: number } {

@@ -65,13 +65,15 @@ export function margins(m: FactoredModel, options: MarginOptions = {}): Margins 
   const logMagAt = (x: number) => Math.log(magnitudeAt(m, x));
   const gainCrossovers: number[] = [];
   const phaseCrossovers: number[] = [];
+  // j1 of one interval is j0 of the next: the branch index of the phase, −180° + 360°·j.
+  let j1 = Math.floor((phase[0] + 180) / 360);
   for (let i = 0; i + 1 < n; i++) {
     if ((mags[i] < 1) !== (mags[i + 1] < 1) && mags[i] > 0 && Number.isFinite(mags[i])) {
       gainCrossovers.push(mags[i + 1] === 1 ? w[i + 1] : bisectLog(logMagAt, w[i], w[i + 1], Math.log(mags[i])));
     }
     if (phaseCrossovers.length >= maxPhase) continue;
-    const j0 = Math.floor((phase[i] + 180) / 360);
-    const j1 = Math.floor((phase[i + 1] + 180) / 360);
+    const j0 = j1;
+    j1 = Math.floor((phase[i + 1] + 180) / 360);
     if (j0 === j1) continue;
     const [from, to] = j1 > j0 ? [j0 + 1, j1] : [j0, j1 + 1];
     const step = j1 > j0 ? 1 : -1;
