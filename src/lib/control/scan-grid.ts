@@ -54,7 +54,9 @@ function scanPoints(m: FactoredModel, known: KnownValues | null): { w: number[];
     else if (Number.isFinite(to)) i = Math.max(i, Math.floor(((Math.log10(to) - a) / (b - a)) * (n - 1)) - 1);
   }
   const roots = rootFrequencies(m);
-  const seedLength = seed ? seed.w.length : 0;
+  // Only as many seed points as the scan's own density needs: margins and the Nyquist walk visit each.
+  const picked = seed ? thinned(seed.w) : [];
+  const seedLength = picked.length;
   const capacity = gridLength + seedLength + roots.length;
   const all = new Float64Array(capacity);
   const indices = new Int32Array(capacity);
@@ -62,11 +64,11 @@ function scanPoints(m: FactoredModel, known: KnownValues | null): { w: number[];
   let g = 0, k = 0, r = 0;
   while (g < gridLength || k < seedLength || r < roots.length) {
     const xg = g < gridLength ? grid[g] : Infinity;
-    const xk = k < seedLength ? seed!.w[k] : Infinity;
+    const xk = k < seedLength ? seed!.w[picked[k]] : Infinity;
     const xr = r < roots.length ? roots[r] : Infinity;
     let x: number, index = -1;
     if (xr <= xg && xr <= xk) x = roots[r++];
-    else if (xk <= xg) { x = xk; index = k++; }
+    else if (xk <= xg) { x = xk; index = picked[k++]; }
     else x = grid[g++];
     if (x >= lo && x <= hi) { all[count] = x; indices[count++] = index; }
   }
@@ -74,6 +76,20 @@ function scanPoints(m: FactoredModel, known: KnownValues | null): { w: number[];
   const fromKnown = new Array<number>(count);
   for (let i = 0; i < count; i++) { w[i] = all[i]; fromKnown[i] = indices[i]; }
   return { w, fromKnown };
+}
+
+/** Indices of a dense ascending grid kept so that no gap exceeds MAX_RATIO (first and last always). */
+function thinned(w: readonly number[]): number[] {
+  const out = [0];
+  let last = w[0];
+  for (let j = 1; j < w.length; j++) {
+    // Keep j when skipping it would leave a gap wider than the scan's own spacing.
+    if (j === w.length - 1 || w[j + 1] > last * MAX_RATIO) {
+      out.push(j);
+      last = w[j];
+    }
+  }
+  return out;
 }
 
 /** Ascending, positive, finite and at least PER_DECADE points per decade throughout. */

@@ -34,9 +34,17 @@ describe('loopScan', () => {
   it('gives the same margins whether or not a frequency response seeds the scan (crossings refined on the exact function)', () => {
     const plain = margins(factor(blocks));
     const m = factor(blocks);
-    seedScan(m, frequencyResponse(m, autoGrid(m, { points: 200 })));
+    const response = frequencyResponse(m, autoGrid(m, { points: 200 }));
+    seedScan(m, response);
     const seeded = margins(m);
-    expect(loopScan(m).w.length).toBeGreaterThan(scanGrid(factor(blocks)).length);
+    // Inside the response's range the scan takes its points (thinned to its own density), besides root frequencies.
+    const w = loopScan(m).w;
+    const seedPoints = new Set(response.w);
+    const roots = new Set([...m.poles, ...m.zeros].map((r) => Math.hypot(r.re, r.im)));
+    const inside = w.filter((x) => x >= response.w[0] && x <= response.w[199]);
+    expect(inside.filter((x) => seedPoints.has(x)).length).toBeGreaterThan(60);
+    inside.forEach((x) => expect(seedPoints.has(x) || [...roots].some((r) => Math.abs(r - x) <= 1e-12 * r)).toBe(true));
+    for (let i = 1; i < w.length; i++) expect(w[i] / w[i - 1]).toBeLessThanOrEqual(10 ** (1 / 16) * (1 + 1e-12));
     for (const key of ['gainMargin', 'phaseMarginDeg', 'gainCrossover', 'phaseCrossover', 'delayMargin', 'ms', 'mt', 'bandwidth'] as const) {
       expect(Math.abs(seeded[key]! - plain[key]!)).toBeLessThan(1e-9 * Math.abs(plain[key]!));
     }
