@@ -187,16 +187,15 @@ function loopResponse(loop: Loop, t: readonly number[], drive: LoopDrive, option
   const fastest = Math.max(largestMagnitude(pPoles), fastestRate(hR));
   const h = internalStep(span, theta, fastest, { ...options, maxSteps });
   const steps = boundedCount(Math.ceil(span / h - 1e-9), 2 * maxSteps + 2, 'The closed-loop simulation would need too many steps; shorten tFinal.', 'analyses.step.tFinal');
-  const forcing = drive.load === undefined ? null : loadForcing(loop, drive.load, steps, h, dtOut);
+  const forcing = drive.load === undefined ? null : loadForcing(gR, hR, drive.load, steps, h, dtOut);
   const reference = { at: (x: number) => rSig.at(t[0] + x), slope: (x: number) => rSig.slope(t[0] + x) };
   const history = stepDelayedLoop(ss, h, steps, theta, reference, forcing, sensorStates.n === 0 ? sensorStates.d[0] : null);
   return readDelayed(history, t, loop.plant.delay, withRate);
 }
 
 /** Known forcing by the load: z = G_R·d and m = H_R·G_R·d (and their rates) on the internal grid. */
-function loadForcing(loop: Loop, load: LoopSignal, steps: number, h: number, dtOut: number): Forcing {
-  const gR = { num: loop.plant.num, den: loop.plant.den, delay: 0 };
-  const hg = { num: multiply(loop.sensor.num, gR.num), den: multiply(loop.sensor.den, gR.den), delay: 0 };
+function loadForcing(gR: TransferFunction, hR: TransferFunction, load: LoopSignal, steps: number, h: number, dtOut: number): Forcing {
+  const hg = { num: multiply(hR.num, gR.num), den: multiply(hR.den, gR.den), delay: 0 };
   const inner = timeGrid(steps * h, steps + 1);
   const innerLoad: LoopSignal = typeof load === 'object' ? { samples: inner.map((x) => sampledAt(load.samples, 0, dtOut).at(x)) } : load;
   const zl = openResponse(gR, inner, innerLoad, h);

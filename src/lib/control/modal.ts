@@ -8,18 +8,12 @@
  */
 import type { Complex, TransferFunction } from './types';
 import type { CubicHold, StateSpace } from './state-space';
-import { evaluate } from './polynomial';
+import { derivative, evaluate } from './polynomial';
 
 /** Poles closer than this fraction of the larger one are treated as a cluster (no modal form). */
 const MIN_SEPARATION = 0.1;
 /** Largest relative mismatch between the modal and polynomial values of p at a test point. */
 const CHECK_TOLERANCE = 1e-11;
-
-/** Derivative of a polynomial in descending powers. */
-function derivative(p: readonly number[]): number[] {
-  const n = p.length - 1;
-  return p.slice(0, n).map((c, i) => c * (n - i));
-}
 
 /**
  * A diagonal StateSpace (a holds the poles on its diagonal, b all ones, c the residues) for p

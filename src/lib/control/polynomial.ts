@@ -90,3 +90,13 @@ export function zeroRootCount(p: readonly number[]): number {
   while (k < t.length - 1 && t[t.length - 1 - k] === 0) k++;
   return k;
 }
+
+/** k-th derivative of a polynomial in descending powers (k = 1 by default). */
+export function derivative(c: readonly number[], k = 1): number[] {
+  let p = [...c];
+  for (let j = 0; j < k; j++) {
+    const n = p.length - 1;
+    p = p.slice(0, -1).map((v, i) => v * (n - i));
+  }
+  return p;
+}

@@ -4,7 +4,7 @@
  * method"). Written here because no small, maintained browser package computes polynomial roots.
  */
 import type { Complex } from './types';
-import { trim, zeroRootCount } from './polynomial';
+import { derivative, trim, zeroRootCount } from './polynomial';
 
 const EPS = 2.220446049250313e-16;
 
@@ -262,16 +262,6 @@ function polishMultiple(c: number[], group: Complex[], m: number): Complex {
     if (cabs(step.re, step.im) <= EPS * cabs(z.re, z.im)) break;
   }
   return z;
-}
-
-/** k-th derivative of a real polynomial. */
-function derivative(c: number[], k: number): number[] {
-  let p = c;
-  for (let j = 0; j < k; j++) {
-    const n = p.length - 1;
-    p = p.slice(0, -1).map((v, i) => v * (n - i));
-  }
-  return p;
 }
 
 function horner(c: number[], z: Complex): Complex {

@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { add, degree, evaluate, evaluateComplex, fromRoots, multiply, trim } from '../../../src/lib/control/polynomial';
+import { add, degree, derivative, evaluate, evaluateComplex, fromRoots, multiply, trim } from '../../../src/lib/control/polynomial';
 
 describe('polynomial helpers', () => {
+  it('differentiates term by term: d/ds (s³ + 2s² + 3s + 4) = 3s² + 4s + 3, d²/ds² = 6s + 4 (power rule)', () => {
+    expect(derivative([1, 2, 3, 4])).toEqual([3, 4, 3]);
+    expect(derivative([1, 2, 3, 4], 2)).toEqual([6, 4]);
+    expect(derivative([5])).toEqual([]);
+  });
+
   it('trims, measures degree, multiplies and adds', () => {
     expect(trim([0, 0, 1, 2])).toEqual([1, 2]);
     expect(degree([0, 0])).toBe(-Infinity);
